@@ -1,0 +1,13 @@
+/** What the command line needs from the outside world; tests pass their own. */
+export interface CliIo {
+  readonly stdout: (text: string) => void;
+  readonly stderr: (text: string) => void;
+  /** Reads a UTF-8 text file ('-' is standard input); throws an Error with a readable message if it cannot. */
+  readonly readFile: (path: string) => string;
+}
+
+/** A usage or input error: printed without a stack trace, exit code 2. */
+export class UsageError extends Error {}
+
+/** Exit codes shared by every command. */
+export const EXIT = { ok: 0, inconsistent: 1, usage: 2 } as const;

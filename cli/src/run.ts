@@ -1,0 +1,56 @@
+/** Dispatches `comove <command> …` and turns errors into messages and exit codes. */
+
+import { PRESETS } from '../../shared/src/index.js';
+import { CALC_HELP, runCalc } from './calcCommand.js';
+import { alignColumns } from './format.js';
+import { EXIT, UsageError, type CliIo } from './io.js';
+
+export const VERSION = '0.1.0';
+
+const HELP = `comove ${VERSION}: recomputes the cosmology-dependent numbers of a manuscript.
+
+Usage: comove <command> [options]
+
+Commands:
+  calc      quantities of a parameter set at given redshifts (comove calc --help)
+  presets   list the published parameter sets known by name
+
+  --help, --version
+`;
+
+/** Runs the command line; returns the exit code (0 ok, 1 inconsistencies, 2 usage or input error). */
+export function runCli(argv: string[], io: CliIo): number {
+  const [command, ...rest] = argv;
+  try {
+    switch (command) {
+      case undefined:
+      case '--help':
+      case '-h':
+      case 'help':
+        io.stdout(HELP);
+        return command === undefined ? EXIT.usage : EXIT.ok;
+      case '--version':
+        io.stdout(`${VERSION}\n`);
+        return EXIT.ok;
+      case 'calc':
+        return runCalc(rest, io);
+      case 'presets':
+        io.stdout(alignColumns(PRESETS.map((p) => [p.name, p.title, p.source + (p.fromMemory ? ' (values quoted from memory)' : '')])).join('\n') + '\n');
+        return EXIT.ok;
+      default:
+        throw new UsageError(`unknown command '${command}'\n\n${HELP}`);
+    }
+  } catch (e) {
+    if (e instanceof UsageError) {
+      io.stderr(`comove: ${e.message}\n`);
+      return EXIT.usage;
+    }
+    // parseArgs reports unknown or malformed options with a TypeError carrying a code.
+    const code = (e as { code?: string }).code;
+    if (typeof code === 'string' && code.startsWith('ERR_PARSE_ARGS')) {
+      io.stderr(`comove: ${(e as Error).message}\n${command === 'calc' ? `\n${CALC_HELP}` : ''}`);
+      return EXIT.usage;
+    }
+    throw e;
+  }
+}

@@ -1,0 +1,5 @@
+/**
+ * Comove's editor-independent core. Pure: no protocol types, no file system, no globals.
+ * Text and numbers in, plain data out.
+ */
+export * from './cosmology/index.js';
