@@ -18,7 +18,7 @@ import {
   type QuantityColumns,
   type QuantityRow,
 } from '../../shared/src/index.js';
-import { CsvWriter } from './csvWriter.js';
+import { columnsToCsv } from './csvWriter.js';
 import { alignColumns, formatNumber } from './format.js';
 import { EXIT, UsageError, type CliIo } from './io.js';
 
@@ -40,22 +40,25 @@ Computes every redshift-dependent quantity of a parameter set at the given redsh
 const TEXT_DIGITS = 6;
 const TEXT_COLUMNS_PER_BLOCK = 6;
 
-/** Parses a list of redshifts; throws UsageError naming the bad entry. */
+const REDSHIFT_TOKEN = /^[+]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
+
+/**
+ * Parses a list of redshifts separated by commas, semicolons, spaces or newlines, with `#`
+ * comments; throws UsageError naming the bad entry and its line.
+ */
 export function parseRedshiftList(text: string, where: string): number[] {
   const out: number[] = [];
-  const lines = text.split(/\r?\n/);
-  lines.forEach((line, i) => {
-    const content = line.replace(/#.*/, '').trim();
-    if (!content) return;
-    for (const item of content.split(/[\s,;]+/)) {
-      if (!item) continue;
-      const z = Number(item);
-      if (!Number.isFinite(z) || z < 0 || !/^[+]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/.test(item)) {
-        throw new UsageError(`${where}${lines.length > 1 ? ` line ${i + 1}` : ''}: '${item}' is not a redshift (a number ≥ 0)`);
-      }
-      out.push(z);
+  const token = /#[^\n]*|[^\s,;#]+/g;
+  for (let m = token.exec(text); m !== null; m = token.exec(text)) {
+    const item = m[0];
+    if (item.charCodeAt(0) === 35) continue; // '#': a comment
+    const z = Number(item);
+    if (!(z >= 0) || !Number.isFinite(z) || !REDSHIFT_TOKEN.test(item)) {
+      const line = text.slice(0, m.index).split('\n').length;
+      throw new UsageError(`${where}${text.includes('\n') ? ` line ${line}` : ''}: '${item}' is not a redshift (a number ≥ 0)`);
     }
-  });
+    out.push(z);
+  }
   if (out.length === 0) throw new UsageError(`${where}: no redshifts given`);
   return out;
 }
@@ -128,24 +131,10 @@ function unitOf(key: string): string {
   return QUANTITIES.find((q) => q.key === key)?.unit ?? '';
 }
 
-/** Significant digits in CSV output: beyond the engine's accuracy (about 1e-10). */
-const CSV_DIGITS = 12;
-
-/** CSV: a header of keys with units in brackets, then one line per redshift. */
-export function toCsv(keys: readonly string[], data: QuantityColumns): string {
-  const cols = [data.redshifts, ...keys.map((k) => data.columns.get(k)!)];
-  const n = data.redshifts.length;
-  const out = new CsvWriter(Math.max(1 << 16, n * cols.length * 14), CSV_DIGITS);
-  out.text(['z', ...keys.map((k) => (unitOf(k) ? `${k} [${unitOf(k)}]` : k))].join(',') + '\n');
-  for (let i = 0; i < n; i++) {
-    out.number(cols[0][i]);
-    for (let j = 1; j < cols.length; j++) {
-      out.byte(44);
-      out.number(cols[j][i]);
-    }
-    out.byte(10);
-  }
-  return out.toString();
+/** CSV: a header of keys with units in brackets, then one line per redshift (12 significant digits). */
+export function toCsv(keys: readonly string[], data: QuantityColumns): Uint8Array {
+  const header = ['z', ...keys.map((k) => (unitOf(k) ? `${k} [${unitOf(k)}]` : k))].join(',');
+  return columnsToCsv(header, [data.redshifts, ...keys.map((k) => data.columns.get(k)!)]);
 }
 
 /** The resolved parameter set as JSON (h, Ωk, Ωr and the other derived values included). */

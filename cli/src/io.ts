@@ -1,6 +1,6 @@
 /** What the command line needs from the outside world; tests pass their own. */
 export interface CliIo {
-  readonly stdout: (text: string) => void;
+  readonly stdout: (text: string | Uint8Array) => void;
   readonly stderr: (text: string) => void;
   /** Reads a UTF-8 text file ('-' is standard input); throws an Error with a readable message if it cannot. */
   readonly readFile: (path: string) => string;

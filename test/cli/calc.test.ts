@@ -9,7 +9,7 @@ function run(argv: string[], files: Record<string, string> = {}) {
   let stdout = '';
   let stderr = '';
   const code = runCli(argv, {
-    stdout: (t) => (stdout += t),
+    stdout: (t) => (stdout += typeof t === 'string' ? t : new TextDecoder().decode(t)),
     stderr: (t) => (stderr += t),
     readFile: (p) => {
       if (p in files) return files[p];

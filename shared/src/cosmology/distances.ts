@@ -113,7 +113,11 @@ function curvedVolumeKernel(u: number, k: 1 | -1): number {
  * closed universe).
  */
 export function comovingVolume(c: Cosmology, z: number): number {
-  const dc = comovingDistance(c, z);
+  return comovingVolumeWithin(c, comovingDistance(c, z));
+}
+
+/** All-sky comoving volume within a line-of-sight comoving distance `dc` (Mpc), Mpc³ (Hogg 1999, eq. 29). */
+export function comovingVolumeWithin(c: Cosmology, dc: number): number {
   const ok = c.params.Omega_k;
   if (ok === 0) return ((4 * Math.PI) / 3) * dc ** 3;
   const r = c.hubbleDistanceMpc / Math.sqrt(Math.abs(ok));

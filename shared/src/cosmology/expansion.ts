@@ -31,6 +31,9 @@ export class Expansion {
   private readonly deExponent: number;
   private readonly isLambda: boolean;
   private readonly hasNeutrinos: boolean;
+  /** One-entry cache of the neutrino density: E², Ωm(z) and Ωr(z) at one redshift share it. */
+  private lastNeutrinoZp1 = NaN;
+  private lastNeutrinoDensity = 0;
 
   constructor(params: CosmologyParameters, neutrinos: NeutrinoModel) {
     this.params = params;
@@ -38,6 +41,16 @@ export class Expansion {
     this.deExponent = 3 * (1 + params.w0 + params.wa);
     this.isLambda = params.w0 === -1 && params.wa === 0;
     this.hasNeutrinos = neutrinos.perSpecies > 0;
+  }
+
+  /** ρν(z)/ρc0 (neutrinos.ts), remembered for the last redshift asked. */
+  neutrinoDensity(zp1: number): number {
+    if (!this.hasNeutrinos) return 0;
+    if (zp1 !== this.lastNeutrinoZp1) {
+      this.lastNeutrinoDensity = neutrinoDensity(this.neutrinos, zp1);
+      this.lastNeutrinoZp1 = zp1;
+    }
+    return this.lastNeutrinoDensity;
   }
 
   /** Dark-energy density relative to its value today, f_de(z) (Linder 2003). */
@@ -54,7 +67,7 @@ export class Expansion {
     const zp1sq = zp1 * zp1;
     let s = p.Omega_cb * zp1sq * zp1 + p.Omega_gamma * zp1sq * zp1sq + p.Omega_k * zp1sq;
     if (p.Omega_Lambda !== 0) s += p.Omega_Lambda * this.darkEnergyScale(zp1);
-    if (this.hasNeutrinos) s += neutrinoDensity(this.neutrinos, zp1);
+    if (this.hasNeutrinos) s += this.neutrinoDensity(zp1);
     return s;
   }
 
@@ -91,7 +104,7 @@ export class Expansion {
    */
   private neutrinoSplit(zp1: number): { relativistic: number; matterLike: number } {
     if (!this.hasNeutrinos) return { relativistic: 0, matterLike: 0 };
-    const total = neutrinoDensity(this.neutrinos, zp1);
+    const total = this.neutrinoDensity(zp1);
     const nu = this.neutrinos;
     const relativistic = Math.min(total, nu.perSpecies * (nu.masslessCount + nu.massiveY.length) * zp1 ** 4);
     return { relativistic, matterLike: total - relativistic };
@@ -116,7 +129,7 @@ export class Expansion {
   densityFractions(zp1: number): DensityFractions {
     const p = this.params;
     const e2 = this.e2(zp1);
-    const nu = this.hasNeutrinos ? neutrinoDensity(this.neutrinos, zp1) : 0;
+    const nu = this.neutrinoDensity(zp1);
     const photons = p.Omega_gamma * zp1 ** 4;
     return {
       matter: this.matterDensity(zp1) / e2,

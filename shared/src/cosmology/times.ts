@@ -42,20 +42,25 @@ export function expansionRate(c: Cosmology, z: number): number {
   return c.expansion.e(1 + z);
 }
 
-/** Critical density ρc(z) = 3H(z)²/(8πG), kg m⁻³ (Peebles 1993, eq. 5.15). */
-function criticalDensitySI(c: Cosmology, z: number): number {
-  const hz = hubbleParameter(c, z) * KM_S_MPC_IN_PER_S;
-  return (3 * hz * hz) / (8 * Math.PI * GRAVITATIONAL_CONSTANT_SI);
+/** Critical density 3H²/(8πG) in kg m⁻³ for H in km s⁻¹ Mpc⁻¹ (Peebles 1993, eq. 5.15). */
+export function criticalDensityForHubble(hubbleKmSMpc: number): number {
+  const h = hubbleKmSMpc * KM_S_MPC_IN_PER_S;
+  return (3 * h * h) / (8 * Math.PI * GRAVITATIONAL_CONSTANT_SI);
 }
+
+/** kg m⁻³ in g cm⁻³. */
+export const KG_M3_IN_G_CM3 = 1e-3;
+/** kg m⁻³ in M☉ Mpc⁻³ (solar mass from IAU 2015 B3 and CODATA 2018 G). */
+export const KG_M3_IN_SOLAR_MPC3 = MPC_M ** 3 / SOLAR_MASS_KG;
 
 /** Critical density at z, g cm⁻³. */
 export function criticalDensityCgs(c: Cosmology, z: number): number {
-  return criticalDensitySI(c, z) * 1e-3;
+  return criticalDensityForHubble(hubbleParameter(c, z)) * KG_M3_IN_G_CM3;
 }
 
-/** Critical density at z, M☉ Mpc⁻³ (solar mass from IAU 2015 B3 and CODATA 2018 G). */
+/** Critical density at z, M☉ Mpc⁻³. */
 export function criticalDensitySolar(c: Cosmology, z: number): number {
-  return (criticalDensitySI(c, z) * MPC_M ** 3) / SOLAR_MASS_KG;
+  return criticalDensityForHubble(hubbleParameter(c, z)) * KG_M3_IN_SOLAR_MPC3;
 }
 
 /**
