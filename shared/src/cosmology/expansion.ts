@@ -61,11 +61,16 @@ export class Expansion {
     return wa === 0 ? power : power * Math.exp(-3 * wa * (1 - 1 / zp1));
   }
 
-  /** E²(z) = H²(z)/H0² for zp1 = 1 + z. */
+  /**
+   * E²(z) = H²(z)/H0² for zp1 = 1 + z. Components with zero density are left out, so that at
+   * huge redshifts 0 × ∞ never turns the sum into NaN.
+   */
   e2(zp1: number): number {
     const p = this.params;
     const zp1sq = zp1 * zp1;
-    let s = p.Omega_cb * zp1sq * zp1 + p.Omega_gamma * zp1sq * zp1sq + p.Omega_k * zp1sq;
+    let s = p.Omega_cb === 0 ? 0 : p.Omega_cb * zp1sq * zp1;
+    if (p.Omega_gamma !== 0) s += p.Omega_gamma * zp1sq * zp1sq;
+    if (p.Omega_k !== 0) s += p.Omega_k * zp1sq;
     if (p.Omega_Lambda !== 0) s += p.Omega_Lambda * this.darkEnergyScale(zp1);
     if (this.hasNeutrinos) s += this.neutrinoDensity(zp1);
     return s;
@@ -80,7 +85,9 @@ export class Expansion {
   de2dx(zp1: number): number {
     const p = this.params;
     const zp1sq = zp1 * zp1;
-    let s = 3 * p.Omega_cb * zp1sq * zp1 + 4 * p.Omega_gamma * zp1sq * zp1sq + 2 * p.Omega_k * zp1sq;
+    let s = p.Omega_cb === 0 ? 0 : 3 * p.Omega_cb * zp1sq * zp1;
+    if (p.Omega_gamma !== 0) s += 4 * p.Omega_gamma * zp1sq * zp1sq;
+    if (p.Omega_k !== 0) s += 2 * p.Omega_k * zp1sq;
     if (p.Omega_Lambda !== 0) {
       const w = p.w0 + p.wa * (1 - 1 / zp1);
       s += 3 * (1 + w) * p.Omega_Lambda * this.darkEnergyScale(zp1);

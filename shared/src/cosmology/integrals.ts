@@ -17,7 +17,9 @@ const REL_TOL = 1e-13;
 export function comovingIntegral(expansion: Expansion, x1: number, x2: number): number {
   return integrateAdaptive((x) => {
     const zp1 = Math.exp(x);
-    return zp1 / expansion.e(zp1);
+    const ratio = zp1 / expansion.e(zp1);
+    // Where 1+z or E overflows the integrand has long since fallen to nothing.
+    return ratio === ratio ? ratio : 0;
   }, x1, x2, { relTol: REL_TOL });
 }
 
