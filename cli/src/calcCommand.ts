@@ -64,12 +64,12 @@ export function parseRedshiftList(text: string, where: string): number[] {
 }
 
 /** Builds the cosmology from --params text; throws UsageError with every problem, each naming its key. */
-export function cosmologyFromText(text: string): Cosmology {
+export function cosmologyFromText(text: string): { cosmology: Cosmology; presetName: string | null } {
   const parsed = parseParameterText(text);
   if (parsed.problems.length) throw new UsageError(parsed.problems.map((p) => `--params: ${p.message}`).join('\n'));
   const made = createCosmology(parsed.input);
   if (!made.ok) throw new UsageError(made.errors.map((e) => `--params: ${e.parameter}: ${e.message}`).join('\n'));
-  return made.cosmology;
+  return { cosmology: made.cosmology, presetName: parsed.preset?.name ?? null };
 }
 
 export function runCalc(argv: string[], io: CliIo): number {
@@ -101,7 +101,7 @@ export function runCalc(argv: string[], io: CliIo): number {
   const format = values.json ? 'json' : (values.format ?? 'text');
   if (!['text', 'json', 'csv'].includes(format)) throw new UsageError(`--format must be text, json or csv, not '${format}'`);
 
-  const cosmology = cosmologyFromText(values.params);
+  const { cosmology, presetName } = cosmologyFromText(values.params);
   const zText = values.z.startsWith('@') ? readList(io, values.z.slice(1)) : values.z;
   const redshifts = parseRedshiftList(zText, values.z.startsWith('@') ? values.z.slice(1) : '--z');
   const keys = values.quantities ? values.quantities.split(',').map((k) => k.trim()).filter(Boolean) : QUANTITIES.map((q) => q.key);
@@ -114,8 +114,8 @@ export function runCalc(argv: string[], io: CliIo): number {
     return EXIT.ok;
   }
   const rows = evaluateQuantities(cosmology, redshifts, keys);
-  if (format === 'json') io.stdout(JSON.stringify(toJson(cosmology, keys, rows, withEpochs), null, 1) + '\n');
-  else io.stdout(toText(cosmology, keys, rows, withEpochs));
+  if (format === 'json') io.stdout(JSON.stringify(toJson(cosmology, keys, rows, withEpochs, presetName), null, 1) + '\n');
+  else io.stdout(toText(cosmology, keys, rows, withEpochs, presetName));
   return EXIT.ok;
 }
 
@@ -147,11 +147,12 @@ function epochsJson(e: Epochs): Record<string, unknown> {
   return Object.fromEntries(Object.entries(e).map(([k, v]) => [k, { ...v, value: v.value !== null && Number.isFinite(v.value) ? v.value : null }]));
 }
 
-export function toJson(c: Cosmology, keys: readonly string[], rows: readonly QuantityRow[], withEpochs: boolean): Record<string, unknown> {
+export function toJson(c: Cosmology, keys: readonly string[], rows: readonly QuantityRow[], withEpochs: boolean, presetName: string | null = null): Record<string, unknown> {
   const units: Record<string, string> = { z: '' };
   for (const k of keys) units[k] = unitOf(k);
   return {
     params: paramsJson(c),
+    preset: presetName,
     units,
     rows,
     ...(withEpochs ? { epochs: epochsJson(epochs(c)) } : {}),
@@ -193,10 +194,10 @@ function describedInput(c: Cosmology): ParameterInput {
 }
 
 /** The readable report: the parameter set, a quantity-by-redshift table in blocks, then the epochs. */
-export function toText(c: Cosmology, keys: readonly string[], rows: readonly QuantityRow[], withEpochs: boolean): string {
+export function toText(c: Cosmology, keys: readonly string[], rows: readonly QuantityRow[], withEpochs: boolean, presetName: string | null = null): string {
   const p = c.params;
   const out: string[] = [];
-  out.push(`Parameter set  ${formatParameterInput(describedInput(c))}`);
+  out.push(`Parameter set  ${presetName ? `${presetName}: ` : ''}${formatParameterInput(describedInput(c))}`);
   out.push(
     `  h = ${formatNumber(p.h)}  Ωm = ${formatNumber(p.Omega_m)}  ΩΛ = ${formatNumber(p.Omega_Lambda)}  Ωk = ${formatNumber(p.Omega_k)}  Ωr = ${formatNumber(p.Omega_r)}  Ων = ${formatNumber(p.Omega_nu)}` +
       (p.Omega_b !== null ? `  Ωb = ${formatNumber(p.Omega_b)}` : ''),

@@ -55,7 +55,7 @@ describe('comove calc', () => {
   it('prints a readable table with the parameter set, each quantity, and the epochs', () => {
     const r = run(['calc', '--params', 'planck-2018', '--z', '0.5,1']);
     expect(r.code).toBe(0);
-    expect(r.stdout).toMatch(/^Parameter set {2}H0=67\.66/);
+    expect(r.stdout).toMatch(/^Parameter set {2}planck-2018: H0=67\.66/);
     expect(r.stdout).toMatch(/luminosity distance D_L +Mpc +2919\.64 +6791\.34/);
     expect(r.stdout).toMatch(/age today +13\.7871 +Gyr/);
     expect(r.stdout).toMatch(/r_drag used for checks +147\.184 +Mpc/);

@@ -25,7 +25,7 @@ describe('growth of structure', () => {
         return c.expansion.e(1 / a) * integral;
       };
       const norm = heath(0);
-      for (const z of [0.1, 0.5, 1, 3, 10]) expect(relativeError(growthFactor(c, z), heath(z) / norm)).toBeLessThan(1e-6);
+      for (const z of [0.1, 0.5, 1, 3, 10]) expect(relativeError(growthFactor(c, z), heath(z) / norm)).toBeLessThan(1e-9);
     }
   });
 

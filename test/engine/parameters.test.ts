@@ -40,6 +40,15 @@ describe('resolving a parameter set', () => {
     expect(r.params.Omega_cb).toBeCloseTo(0.31 - massiveNeutrinoDensityParameter(0.06, 0.6766), 15);
   });
 
+  it('the Komatsu et al. 2011 fit at z = 0 gives Σmν/(Ων h²) = 92.6 eV, within 0.6 % of the 93.14 eV convention (as the README says)', () => {
+    const r = resolveParameters({ H0: 67.66, Omega_m: 0.31, T_CMB: 2.7255, N_eff: 3.046, m_nu: 0.06, flat: true });
+    if (!r.ok) throw new Error('bad set');
+    const massive = r.params.Omega_nu - r.neutrinos.perSpecies * r.neutrinos.masslessCount;
+    const evPerOmegaH2 = 0.06 / (massive * r.params.h ** 2);
+    expect(evPerOmegaH2).toBeCloseTo(92.6, 1);
+    expect(Math.abs(massive - r.params.Omega_nu_mass)).toBeLessThan(1e-5);
+  });
+
   it('derives Ωm from ωb and ωc', () => {
     const r = resolveParameters({ H0: 70, omega_b: 0.0245, omega_c: 0.1225 });
     expect(r.ok && r.params.Omega_m).toBeCloseTo(0.3, 14);
