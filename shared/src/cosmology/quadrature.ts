@@ -10,35 +10,31 @@ export interface QuadratureRule {
   readonly weights: Float64Array;
 }
 
+/** P_n(x) and its derivative, from the three-term recurrence (Abramowitz & Stegun 1964, §22.7.10). */
+function legendre(n: number, x: number): [value: number, derivative: number] {
+  let p0 = 1;
+  let p1 = x;
+  for (let k = 2; k <= n; k++) {
+    const p2 = ((2 * k - 1) * x * p1 - (k - 1) * p0) / k;
+    p0 = p1;
+    p1 = p2;
+  }
+  return [p1, (n * (x * p1 - p0)) / (x * x - 1)];
+}
+
 /** The n-point Gauss–Legendre rule on [−1, 1], exact for polynomials of degree 2n − 1. */
 export function gaussLegendreRule(n: number): QuadratureRule {
   const nodes = new Float64Array(n);
   const weights = new Float64Array(n);
   for (let i = 0; i < Math.ceil(n / 2); i++) {
     let x = Math.cos((Math.PI * (i + 0.75)) / (n + 0.5));
-    let dp = 0;
     for (let iter = 0; iter < 100; iter++) {
-      let p0 = 1;
-      let p1 = x;
-      for (let k = 2; k <= n; k++) {
-        const p2 = ((2 * k - 1) * x * p1 - (k - 1) * p0) / k;
-        p0 = p1;
-        p1 = p2;
-      }
-      dp = (n * (x * p1 - p0)) / (x * x - 1);
-      const dx = p1 / dp;
+      const [p, dp] = legendre(n, x);
+      const dx = p / dp;
       x -= dx;
       if (Math.abs(dx) < 1e-16) break;
     }
-    // Recompute the derivative at the converged node for the weight.
-    let p0 = 1;
-    let p1 = x;
-    for (let k = 2; k <= n; k++) {
-      const p2 = ((2 * k - 1) * x * p1 - (k - 1) * p0) / k;
-      p0 = p1;
-      p1 = p2;
-    }
-    dp = (n * (x * p1 - p0)) / (x * x - 1);
+    const dp = legendre(n, x)[1];
     const w = 2 / ((1 - x * x) * dp * dp);
     nodes[i] = -x;
     nodes[n - 1 - i] = x;
