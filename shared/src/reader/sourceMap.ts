@@ -1,0 +1,237 @@
+/**
+ * Reading text with a map back to the source. Readers turn markup into plain "reading text"
+ * (what a person reads: `$D_L = 6.6$\,Gpc` becomes `D_L = 6.6 Gpc`) and every character of
+ * that text keeps the source range it came from, so that findings point at the author's text.
+ *
+ * A reader writes into an OutputStore, piece by piece, into several outputs at once (a
+ * paragraph, a footnote met inside it, table cells); each output ("draft") becomes a block.
+ * The store keeps every piece as a record in one growing Int32Array — no object per piece —
+ * because a megabyte of LaTeX makes about a hundred thousand pieces, and keeping each alive as
+ * a string and an object until the end made the garbage collector the slowest part of reading.
+ * A verbatim piece maps character by character to its source; a replacement (a macro, a symbol,
+ * an expansion) maps every character to the whole source span it replaced.
+ */
+
+/** One output being written: it becomes one block of the reading text. */
+export interface Draft {
+  readonly id: number;
+  /** Characters written so far. */
+  length: number;
+  /** Char code of the last character written (0 before any). */
+  last: number;
+  /** True while nothing but white space has been written. */
+  blank: boolean;
+  /** Index of this draft's first record, to read its text back quickly. */
+  firstRecord: number;
+}
+
+// Record fields (stride 5): draft id, offset in the draft, source start, source end, string index (−1: verbatim).
+const R_DRAFT = 0;
+const R_OUT = 1;
+const R_START = 2;
+const R_END = 3;
+const R_STR = 4;
+const R_STRIDE = 5;
+
+// Map fields of ReadingText (stride 4): reading offset, source start, source end, exact (1) or not (0).
+const M_OUT = 0;
+const M_START = 1;
+const M_END = 2;
+const M_EXACT = 3;
+const M_STRIDE = 4;
+
+function isBlankCode(c: number): boolean {
+  return c === 32 || c === 10 || c === 9 || c === 13;
+}
+
+/** Collects the pieces of every draft of one document. */
+export class OutputStore {
+  private records = new Int32Array(1 << 12);
+  private count = 0;
+  private readonly strings: string[] = [];
+  private nextId = 0;
+
+  constructor(private readonly source: string) {}
+
+  /** A new, empty output. */
+  draft(): Draft {
+    return { id: this.nextId++, length: 0, last: 0, blank: true, firstRecord: -1 };
+  }
+
+  private push(d: Draft, start: number, end: number, str: number, len: number): void {
+    if (this.count * R_STRIDE + R_STRIDE > this.records.length) {
+      const grown = new Int32Array(this.records.length * 2);
+      grown.set(this.records);
+      this.records = grown;
+    }
+    const r = this.records;
+    const k = this.count * R_STRIDE;
+    r[k + R_DRAFT] = d.id;
+    r[k + R_OUT] = d.length;
+    r[k + R_START] = start;
+    r[k + R_END] = end;
+    r[k + R_STR] = str;
+    if (d.firstRecord < 0) d.firstRecord = this.count;
+    this.count++;
+    d.length += len;
+  }
+
+  /** Appends source[start, end) of the original source verbatim. */
+  copy(d: Draft, start: number, end: number): void {
+    const s = this.source;
+    // White space never doubles, and an output never starts with it.
+    if (d.last === 0 || isBlankCode(d.last)) while (start < end && isBlankCode(s.charCodeAt(start))) start++;
+    if (end <= start) return;
+    if (d.blank) {
+      for (let i = start; i < end; i++) {
+        if (!isBlankCode(s.charCodeAt(i))) {
+          d.blank = false;
+          break;
+        }
+      }
+    }
+    d.last = s.charCodeAt(end - 1);
+    const k = (this.count - 1) * R_STRIDE;
+    const r = this.records;
+    // A copy that continues the draft's previous verbatim piece extends it.
+    if (k >= 0 && r[k + R_DRAFT] === d.id && r[k + R_STR] === -1 && r[k + R_END] === start) {
+      r[k + R_END] = end;
+      d.length += end - start;
+      return;
+    }
+    this.push(d, start, end, -1, end - start);
+  }
+
+  /** Appends `text` standing for source[start, end). */
+  replace(d: Draft, text: string, start: number, end: number): void {
+    if ((d.last === 0 || isBlankCode(d.last)) && text.length && isBlankCode(text.charCodeAt(0))) text = text.replace(/^\s+/, '');
+    if (!text) return;
+    if (d.blank && text !== ' ' && /\S/.test(text)) d.blank = false;
+    d.last = text.charCodeAt(text.length - 1);
+    this.strings.push(text);
+    this.push(d, start, end, this.strings.length - 1, text.length);
+  }
+
+  /** Appends a space standing for source[start, end), unless the draft is empty or already ends in white space. */
+  space(d: Draft, start: number, end: number): void {
+    if (d.last === 0 || isBlankCode(d.last)) return;
+    this.replace(d, ' ', start, end);
+  }
+
+  /** The text of one draft. */
+  textOf(d: Draft): string {
+    if (d.firstRecord < 0) return '';
+    const parts: string[] = [];
+    const r = this.records;
+    for (let i = d.firstRecord; i < this.count; i++) {
+      const k = i * R_STRIDE;
+      if (r[k + R_DRAFT] !== d.id) continue;
+      parts.push(r[k + R_STR] < 0 ? this.source.slice(r[k + R_START], r[k + R_END]) : this.strings[r[k + R_STR]]);
+    }
+    return parts.join('');
+  }
+
+  /**
+   * The reading text of `drafts`, in that order, with `separator` between them, and each draft's
+   * start offset in it.
+   */
+  assemble(drafts: readonly Draft[], separator: string): { reading: ReadingText; starts: number[] } {
+    const order = new Int32Array(this.nextId).fill(-1);
+    drafts.forEach((d, i) => (order[d.id] = i));
+    // Counting sort of the records by the position of their draft.
+    const perDraft = new Int32Array(drafts.length + 1);
+    const r = this.records;
+    for (let i = 0; i < this.count; i++) {
+      const o = order[r[i * R_STRIDE + R_DRAFT]];
+      if (o >= 0) perDraft[o + 1]++;
+    }
+    for (let i = 0; i < drafts.length; i++) perDraft[i + 1] += perDraft[i];
+    const sorted = new Int32Array(perDraft[drafts.length]);
+    const fill = perDraft.slice(0, drafts.length);
+    for (let i = 0; i < this.count; i++) {
+      const o = order[r[i * R_STRIDE + R_DRAFT]];
+      if (o >= 0) sorted[fill[o]++] = i;
+    }
+    const starts: number[] = new Array(drafts.length);
+    const pieces: string[] = [];
+    const map = new Int32Array((sorted.length + drafts.length) * M_STRIDE);
+    let m = 0;
+    let offset = 0;
+    for (let j = 0; j < drafts.length; j++) {
+      if (j > 0) {
+        pieces.push(separator);
+        const prevEnd = m ? map[m - M_STRIDE + M_END] : 0;
+        map[m++] = offset;
+        map[m++] = prevEnd;
+        map[m++] = prevEnd;
+        map[m++] = 0;
+        offset += separator.length;
+      }
+      starts[j] = offset;
+      const draftPieces: string[] = [];
+      for (let q = perDraft[j]; q < perDraft[j + 1]; q++) {
+        const k = sorted[q] * R_STRIDE;
+        const str = r[k + R_STR];
+        const text = str < 0 ? this.source.slice(r[k + R_START], r[k + R_END]) : this.strings[str];
+        draftPieces.push(text);
+        map[m++] = offset + r[k + R_OUT];
+        map[m++] = r[k + R_START];
+        map[m++] = r[k + R_END];
+        map[m++] = str < 0 ? 1 : 0;
+      }
+      pieces.push(draftPieces.join(''));
+      offset += drafts[j].length;
+    }
+    return { reading: new ReadingText(pieces.join(''), map.subarray(0, m)), starts };
+  }
+}
+
+/** Reading text and the map from its offsets to source offsets. */
+export class ReadingText {
+  constructor(
+    readonly text: string,
+    private readonly map: ArrayLike<number>,
+  ) {}
+
+  /** An empty reading. */
+  static empty(): ReadingText {
+    return new ReadingText('', new Int32Array(0));
+  }
+
+  /** Field offset of the map entry containing reading offset `out` (the last starting at or before it), or −1. */
+  private entryAt(out: number): number {
+    const n = this.map.length / M_STRIDE;
+    if (n === 0) return -1;
+    let lo = 0;
+    let hi = n - 1;
+    while (lo < hi) {
+      const mid = (lo + hi + 1) >> 1;
+      if (this.map[mid * M_STRIDE] <= out) lo = mid;
+      else hi = mid - 1;
+    }
+    return lo * M_STRIDE;
+  }
+
+  /** Source offset of the character at reading offset `out` (its start). */
+  sourceStart(out: number): number {
+    const k = this.entryAt(out);
+    if (k < 0) return 0;
+    const c = this.map;
+    return c[k + M_EXACT] === 1 ? Math.min(c[k + M_START] + (out - c[k + M_OUT]), c[k + M_END]) : c[k + M_START];
+  }
+
+  /** Source offset just past the character before reading offset `outEnd`. */
+  sourceEnd(outEnd: number): number {
+    if (outEnd <= 0) return this.sourceStart(0);
+    const k = this.entryAt(outEnd - 1);
+    if (k < 0) return 0;
+    const c = this.map;
+    return c[k + M_EXACT] === 1 ? Math.min(c[k + M_START] + (outEnd - c[k + M_OUT]), c[k + M_END]) : c[k + M_END];
+  }
+
+  /** Source range [start, end) of the reading range [outStart, outEnd). */
+  sourceRange(outStart: number, outEnd: number): { start: number; end: number } {
+    const start = this.sourceStart(outStart);
+    return { start, end: Math.max(start, this.sourceEnd(outEnd)) };
+  }
+}
