@@ -2,13 +2,24 @@
 import { build } from 'esbuild';
 import { chmodSync } from 'node:fs';
 
-const common = { bundle: true, platform: 'node', target: 'node20', format: 'esm', sourcemap: true, logLevel: 'warning' };
+// Some dependencies are CommonJS and call require() for Node built-ins; an ES module bundle
+// needs a require of its own for them.
+const requireShim = "import { createRequire as __comoveCreateRequire } from 'node:module'; const require = __comoveCreateRequire(import.meta.url);";
+const common = {
+  bundle: true,
+  platform: 'node',
+  target: 'node20',
+  format: 'esm',
+  sourcemap: true,
+  logLevel: 'warning',
+  banner: { js: requireShim },
+};
 
 await build({
   ...common,
   entryPoints: ['cli/src/main.ts'],
   outfile: 'dist/cli.js',
-  banner: { js: '#!/usr/bin/env node' },
+  banner: { js: `#!/usr/bin/env node\n${requireShim}` },
 });
 chmodSync('dist/cli.js', 0o755);
 

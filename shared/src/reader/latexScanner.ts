@@ -122,12 +122,13 @@ class LatexScanner {
   readonly problems: ReaderProblem[] = [];
   texRoot: string | null = null;
 
-  constructor(source: string, macros: readonly MacroDefinition[]) {
+  constructor(source: string, macros: readonly MacroDefinition[], mathMode = false) {
     this.original = source;
     this.store = new OutputStore(source);
     this.frame = { src: source, pos: 0, span: null };
     for (const m of macros) this.macros.set(m.name, m);
     this.current = this.newDraft('paragraph');
+    if (mathMode) this.mathDepth = 1;
   }
 
   private newDraft(kind: BlockKind): Draft {
@@ -1168,12 +1169,16 @@ export function readLatexFragment(fragment: string, macros: ReadonlyMap<string, 
   return scanner.run().reading.text.trim();
 }
 
-/**
- * Reads a LaTeX source. `macros` are definitions known from elsewhere (the root file of a
- * multi-file project). Never throws.
- */
-export function readLatex(source: string, macros: readonly MacroDefinition[] = []): DocumentReading & { macros: readonly MacroDefinition[] } {
-  const scanner = new LatexScanner(source, macros);
+export interface LatexReadOptions {
+  /** Definitions known from elsewhere (the root file of a multi-file project). */
+  readonly macros?: readonly MacroDefinition[];
+  /** Read the whole source as math (the content of a formula taken from another format). */
+  readonly math?: boolean;
+}
+
+/** Reads a LaTeX source. Never throws. */
+export function readLatex(source: string, options: LatexReadOptions = {}): DocumentReading & { macros: readonly MacroDefinition[] } {
+  const scanner = new LatexScanner(source, options.macros ?? [], options.math ?? false);
   let reading: DocumentReading;
   try {
     reading = scanner.run();

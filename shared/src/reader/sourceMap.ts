@@ -229,6 +229,18 @@ export class ReadingText {
     return c[k + M_EXACT] === 1 ? Math.min(c[k + M_START] + (outEnd - c[k + M_OUT]), c[k + M_END]) : c[k + M_END];
   }
 
+  /**
+   * Calls `visit` for each piece of the reading text, in order: its reading range, its source
+   * range, and whether it is a verbatim copy.
+   */
+  forEachPiece(visit: (outStart: number, outEnd: number, srcStart: number, srcEnd: number, exact: boolean) => void): void {
+    const c = this.map;
+    for (let k = 0; k < c.length; k += M_STRIDE) {
+      const outEnd = k + M_STRIDE < c.length ? c[k + M_STRIDE + M_OUT] : this.text.length;
+      visit(c[k + M_OUT], outEnd, c[k + M_START], c[k + M_END], c[k + M_EXACT] === 1);
+    }
+  }
+
   /** Source range [start, end) of the reading range [outStart, outEnd). */
   sourceRange(outStart: number, outEnd: number): { start: number; end: number } {
     const start = this.sourceStart(outStart);

@@ -1,0 +1,250 @@
+/**
+ * The Markdown reader: unified + remark-parse, with remark-gfm (tables, footnotes), remark-math
+ * ($…$ and $$…$$) and remark-frontmatter (YAML, read with `yaml`). Prose, headings, list items
+ * and block quotes become blocks; table cells become blocks with their column header; math is
+ * read by the LaTeX reader and mapped back into the Markdown source; code is skipped. Directive
+ * comments are `<!-- comove: … -->`; front matter may declare the cosmology under `cosmology:`
+ * (or `comove:`). Never throws.
+ */
+
+import type { Nodes, Root, RootContent, Table } from 'mdast';
+import remarkFrontmatter from 'remark-frontmatter';
+import remarkGfm from 'remark-gfm';
+import remarkMath from 'remark-math';
+import remarkParse from 'remark-parse';
+import { unified } from 'unified';
+import { parse as parseYaml } from 'yaml';
+import type { Block, BlockKind, Directive, DocumentReading, MathSpan, ReaderProblem, TableCellPosition } from './documentReading.js';
+import { readLatex } from './latexScanner.js';
+import { splitSentences } from './sentences.js';
+import { OutputStore, ReadingText, type Draft } from './sourceMap.js';
+
+const parser = unified().use(remarkParse).use(remarkGfm).use(remarkMath).use(remarkFrontmatter, ['yaml']);
+
+interface BlockDraft {
+  kind: BlockKind;
+  readonly out: Draft;
+  readonly math: MathSpan[];
+  readonly cell?: TableCellPosition;
+}
+
+const DIRECTIVE = /^<!--\s*comove\s*:([\s\S]*?)-->$/i;
+
+class MarkdownWalker {
+  private readonly store: OutputStore;
+  readonly blocks: BlockDraft[] = [];
+  readonly directives: Array<Omit<Directive, 'readingOffset'> & { blockIndex: number }> = [];
+  readonly problems: ReaderProblem[] = [];
+  frontMatter: Record<string, unknown> | null = null;
+  private tableCount = 0;
+
+  constructor(private readonly source: string) {
+    this.store = new OutputStore(source);
+  }
+
+  private block(kind: BlockKind, cell?: TableCellPosition): BlockDraft {
+    const b: BlockDraft = cell ? { kind, out: this.store.draft(), math: [], cell } : { kind, out: this.store.draft(), math: [] };
+    this.blocks.push(b);
+    return b;
+  }
+
+  walkBlocks(nodes: readonly RootContent[]): void {
+    for (const node of nodes) this.walkBlock(node);
+  }
+
+  private walkBlock(node: RootContent): void {
+    switch (node.type) {
+      case 'yaml':
+        this.readFrontMatter(node.value, node.position?.start.offset ?? 0, node.position?.end.offset ?? 0);
+        return;
+      case 'heading':
+        this.inline(this.block('heading'), node.children);
+        return;
+      case 'paragraph':
+        this.inline(this.block('paragraph'), node.children);
+        return;
+      case 'math':
+        this.math(this.block('paragraph'), node, true);
+        return;
+      case 'html':
+        this.html(node.value, node.position?.start.offset ?? 0, node.position?.end.offset ?? 0);
+        return;
+      case 'table':
+        this.table(node);
+        return;
+      case 'footnoteDefinition': {
+        const before = this.blocks.length;
+        this.walkBlocks(node.children);
+        for (let i = before; i < this.blocks.length; i++) if (this.blocks[i].kind === 'paragraph') this.blocks[i].kind = 'footnote';
+        return;
+      }
+      case 'code':
+      case 'thematicBreak':
+      case 'definition':
+        return;
+      default:
+        if ('children' in node) this.walkBlocks(node.children as RootContent[]);
+    }
+  }
+
+  private inline(b: BlockDraft, nodes: readonly Nodes[]): void {
+    for (const node of nodes) {
+      const start = node.position?.start.offset ?? 0;
+      const end = node.position?.end.offset ?? start;
+      switch (node.type) {
+        case 'text':
+          if (this.source.slice(start, end) === node.value) this.store.copy(b.out, start, end);
+          else this.store.replace(b.out, node.value.replace(/\s+/g, ' '), start, end);
+          break;
+        case 'inlineMath':
+          this.math(b, node, false);
+          break;
+        case 'break':
+          this.store.space(b.out, start, end);
+          break;
+        case 'html':
+          this.html(node.value, start, end);
+          break;
+        case 'inlineCode':
+        case 'image':
+        case 'imageReference':
+          this.store.space(b.out, start, end);
+          break;
+        case 'footnoteReference':
+          break;
+        default:
+          if ('children' in node) this.inline(b, node.children as Nodes[]);
+      }
+    }
+  }
+
+  /** Math content is read by the LaTeX reader and its pieces mapped into the Markdown source. */
+  private math(b: BlockDraft, node: { value: string; position?: { start: { offset?: number }; end: { offset?: number } } }, display: boolean): void {
+    const start = node.position?.start.offset ?? 0;
+    const end = node.position?.end.offset ?? start;
+    const raw = this.source.slice(start, end);
+    const at = raw.indexOf(node.value);
+    const verbatim = node.value.length > 0 && at >= 0;
+    const base = start + (verbatim ? at : 0);
+    const inner = readLatex(node.value, { math: true });
+    const outStart = b.out.length;
+    inner.reading.forEachPiece((o0, o1, s0, s1, exact) => {
+      const text = inner.reading.text.slice(o0, o1);
+      if (exact && verbatim) this.store.copy(b.out, base + s0, base + s1);
+      else this.store.replace(b.out, text, verbatim ? base + s0 : start, verbatim ? base + s1 : end);
+    });
+    b.math.push({ start: outStart, end: b.out.length, display });
+  }
+
+  private html(value: string, start: number, end: number): void {
+    const m = DIRECTIVE.exec(value.trim());
+    if (m) this.directives.push({ text: m[1].trim(), sourceStart: start, sourceEnd: end, blockIndex: this.blocks.length });
+  }
+
+  private table(node: Table): void {
+    const id = this.tableCount++;
+    const headers: string[] = [];
+    node.children.forEach((row, r) => {
+      row.children.forEach((cell, c) => {
+        const b = this.block('table-cell', { table: id, row: r, column: c, header: r === 0 ? null : headers[c] ?? null });
+        this.inline(b, cell.children);
+        if (r === 0) headers[c] = this.store.textOf(b.out).trim();
+      });
+    });
+  }
+
+  private readFrontMatter(value: string, start: number, end: number): void {
+    try {
+      const data = parseYaml(value) as unknown;
+      if (data && typeof data === 'object' && !Array.isArray(data)) {
+        this.frontMatter = data as Record<string, unknown>;
+        for (const key of ['cosmology', 'comove']) {
+          const declared = this.frontMatter[key];
+          if (declared === undefined || declared === null) continue;
+          this.directives.push({ text: frontMatterDeclaration(declared), sourceStart: start, sourceEnd: end, blockIndex: this.blocks.length });
+        }
+      }
+    } catch (e) {
+      this.problems.push({ message: `front matter is not valid YAML: ${(e as Error).message.split('\n')[0]}`, sourceStart: start, sourceEnd: end, severity: 'warning' });
+    }
+  }
+
+  assemble(): DocumentReading {
+    const drafts = this.blocks.filter((b) => b.out.length > 0);
+    const { reading, starts } = this.store.assemble(drafts.map((d) => d.out), '\n\n');
+    const blocks: Block[] = [];
+    const math: MathSpan[] = [];
+    const startOf = new Map<BlockDraft, number>();
+    drafts.forEach((d, i) => {
+      const start = starts[i];
+      startOf.set(d, start);
+      const end = start + d.out.length;
+      const trimmedEnd = end - (/\s*$/.exec(reading.text.slice(start, end))?.[0].length ?? 0);
+      if (trimmedEnd > start) blocks.push(d.cell ? { kind: d.kind, start, end: trimmedEnd, cell: d.cell } : { kind: d.kind, start, end: trimmedEnd });
+      for (const m of d.math) if (m.end > m.start) math.push(trimRange(reading.text, { start: start + m.start, end: start + m.end, display: m.display }));
+    });
+    const readingOffsetOf = (blockIndex: number) => {
+      for (let i = blockIndex; i < this.blocks.length; i++) {
+        const s = startOf.get(this.blocks[i]);
+        if (s !== undefined) return s;
+      }
+      return reading.text.length;
+    };
+    return {
+      format: 'markdown',
+      reading,
+      blocks,
+      math,
+      sentences: splitSentences(reading.text, blocks, math),
+      directives: this.directives.map(({ blockIndex, ...d }) => ({ ...d, readingOffset: readingOffsetOf(blockIndex) })),
+      includes: [],
+      texRoot: null,
+      frontMatter: this.frontMatter,
+      problems: this.problems,
+    };
+  }
+}
+
+function trimRange<T extends { start: number; end: number }>(text: string, r: T): T {
+  let { start, end } = r;
+  while (start < end && /\s/.test(text[start])) start++;
+  while (end > start && /\s/.test(text[end - 1])) end--;
+  return { ...r, start, end };
+}
+
+/**
+ * The declaration text of a front-matter entry: a string as it is (`planck-2018`,
+ * `H0=70 Omega_m=0.3 flat`), a mapping as key=value pairs (`{H0: 70, flat: true}`).
+ */
+export function frontMatterDeclaration(value: unknown): string {
+  if (typeof value === 'string' || typeof value === 'number') return String(value);
+  if (value && typeof value === 'object' && !Array.isArray(value)) {
+    return Object.entries(value as Record<string, unknown>)
+      .map(([k, v]) => (v === true && k.toLowerCase() === 'flat' ? 'flat' : k.toLowerCase() === 'preset' ? String(v) : `${k}=${String(v)}`))
+      .join(' ');
+  }
+  return '';
+}
+
+/** Reads a Markdown source. Never throws. */
+export function readMarkdown(source: string): DocumentReading {
+  const walker = new MarkdownWalker(source);
+  try {
+    const tree = parser.parse(source) as Root;
+    walker.walkBlocks(tree.children);
+    return walker.assemble();
+  } catch (e) {
+    return {
+      format: 'markdown',
+      reading: ReadingText.empty(),
+      blocks: [],
+      math: [],
+      sentences: [],
+      directives: [],
+      includes: [],
+      texRoot: null,
+      frontMatter: null,
+      problems: [{ message: `internal reader error: ${(e as Error).message}`, sourceStart: 0, sourceEnd: 0, severity: 'error' }],
+    };
+  }
+}
