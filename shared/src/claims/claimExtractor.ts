@@ -1,0 +1,321 @@
+/**
+ * Finds the cosmology-dependent claims of a document: each number whose unit and wording make
+ * it a distance, time, scale, volume, temperature, expansion factor, density or epoch, typed
+ * and bound to its redshift. Numbers that are not claims — years, equation and figure numbers,
+ * counts, masses, wavelengths, photometric magnitudes, apertures, seeing, parallax distances,
+ * measured posteriors — are left alone. Where the binding is ambiguous the claim is kept as
+ * `unchecked` with the reason: better than a wrong binding.
+ */
+
+import type { DocumentReading, Sentence } from '../reader/documentReading.js';
+import { KIND_CUES, NEEDS_REDSHIFT, PURE_NUMBER_CUES, type ClaimKind } from './claimKinds.js';
+import { findDeclarations, parameterStatements, type Declaration, type DeclarationScan } from './declarations.js';
+import { findNumbers, unitAt, type StatedNumber } from './numberParser.js';
+import { findRedshifts, type RedshiftMention } from './redshifts.js';
+
+export type RedshiftSource = 'sentence' | 'respectively' | 'previous-sentence' | 'table-row' | 'caption' | 'epoch';
+
+export interface Claim {
+  readonly kind: ClaimKind;
+  readonly value: StatedNumber;
+  /** Redshift the claim is about (null for epochs and today's values). */
+  readonly z: number | null;
+  /** For claims about an interval of redshift (a volume between z1 and z2). */
+  readonly zRange: readonly [number, number] | null;
+  readonly zSource: RedshiftSource | null;
+  /** For a size stated for an angle ("1″ corresponds to 8.4 kpc"): the angle in arcsec. */
+  readonly angleArcsec: number | null;
+  /** For density claims: the parameter or component named. */
+  readonly parameter: string | null;
+  /** Epoch a "since …" claim refers to (an expansion factor since recombination). */
+  readonly sinceEpoch: 'recombination' | null;
+  /** Reading-text range of the claim (number and unit). */
+  readonly start: number;
+  readonly end: number;
+  readonly sentenceStart: number;
+  readonly sentenceEnd: number;
+  /** 0–1: how sure the extraction is of the kind and binding. */
+  readonly confidence: number;
+  /** Why the claim cannot be checked as it stands, or null. */
+  readonly unchecked: string | null;
+}
+
+export interface ClaimScan {
+  readonly claims: readonly Claim[];
+  readonly declarations: DeclarationScan;
+}
+
+/** Contexts in which a number with a unit is not a cosmological claim. */
+const NOT_A_CLAIM = /parallax|Gaia|Milky Way|Galactic|nearby star|aperture|seeing|FWHM|PSF|resolution of|pixel|slit|beam|wavelength|λ|strain|posterior|credible|gravitational[- ]wave|GW\d|H\s*II|\brest[- ]frame\b/i;
+const MEASURED = /\b(?:we (?:measure|find|obtain|infer|derive|constrain)|measured|posterior|best[- ]fit|credible)\b/i;
+
+function lastMatchEnd(re: RegExp, text: string): number {
+  const g = new RegExp(re.source, re.flags.includes('g') ? re.flags : re.flags + 'g');
+  let end = -1;
+  for (const m of text.matchAll(g)) end = m.index! + m[0].length;
+  return end;
+}
+
+function dimensionsMatch(want: Partial<Record<string, number>> | null, got: Record<string, number>): boolean {
+  if (!want) return false;
+  for (const k of ['length', 'time', 'angle', 'temperature', 'mass', 'magnitude']) if ((want[k] ?? 0) !== (got[k] ?? 0)) return false;
+  return true;
+}
+
+/** Extracts the claims of a document. Never throws. */
+export function extractClaims(doc: DocumentReading): ClaimScan {
+  const declarations = findDeclarations(doc);
+  const text = doc.reading.text;
+  const claims: Claim[] = [];
+  const inSkip = (pos: number) => declarations.skips.some((s) => pos >= s.start && pos < s.end);
+  const declared = declarations.declarations.filter((d) => d.origin === 'prose');
+  const inDeclaration = (pos: number) => declared.some((d: Declaration) => pos >= d.start && pos < d.end);
+  const cellBlocks = new Set(doc.blocks.filter((b) => b.kind === 'table-cell'));
+
+  let previous: { sentence: Sentence; mentions: RedshiftMention[] } | null = null;
+  for (const sentence of doc.sentences) {
+    const block = doc.blocks.find((b) => b.start <= sentence.start && sentence.end <= b.end);
+    if (block && cellBlocks.has(block)) continue; // table cells are read by the table pass
+    const mentions = findRedshifts(text, sentence.start, sentence.end);
+    const numbers = findNumbers(text, sentence.start, sentence.end);
+    const redshiftNumbers = new Set<number>([...mentions.map((m) => m.numberStart), ...mentions.flatMap((m) => m.listNumberStarts)]);
+    const statementRanges = parameterStatements(text, sentence.start, sentence.end);
+    const sentenceText = text.slice(sentence.start, sentence.end);
+    const measured = MEASURED.test(sentenceText) && !/\badopt|\bassum/i.test(sentenceText);
+
+    const found: Array<Omit<Claim, 'z' | 'zRange' | 'zSource' | 'unchecked' | 'confidence'> & { cueDistance: number }> = [];
+    numbers.forEach((stated, index) => {
+      let n = stated;
+      if (inSkip(n.start) || inDeclaration(n.start)) return;
+      if (statementRanges.some((st) => n.start >= st.start && n.start < st.end)) {
+        // Ω and H0 statements outside a declaration are density and Hubble-constant claims.
+        const st = statementRanges.find((x) => n.start >= x.start && n.start < x.end)!;
+        if (st.key !== 'H0' && st.key !== 'h' && !measured) {
+          found.push({ kind: 'densityParameter', value: n, angleArcsec: null, parameter: st.key, sinceEpoch: null, start: n.start, end: n.end, sentenceStart: sentence.start, sentenceEnd: sentence.end, cueDistance: 0 });
+        }
+        return;
+      }
+      const windowStart = Math.max(sentence.start, index > 0 ? Math.min(numbers[index - 1].start, n.start) - 60 : sentence.start);
+      const before = text.slice(windowStart, n.start);
+      const near = text.slice(Math.max(sentence.start, n.start - 90), n.start);
+      const after = text.slice(n.end, Math.min(sentence.end, n.end + 40));
+      // "4.4 and 6.1 kpc": a number without a unit shares the unit of the next one in a list.
+      const next = numbers[index + 1];
+      const shared = !n.unit && next?.unit?.unit && /^\s*(?:,|and|or|,\s*and)\s*$/.test(text.slice(n.end, next.start)) ? next.unit : null;
+      if (shared) n = { ...n, unit: { ...shared, start: n.end, end: n.end } };
+      const unit = n.unit?.unit ?? null;
+      if (NOT_A_CLAIM.test(near) || (n.uncertainty && measured)) return;
+
+      if (redshiftNumbers.has(n.start)) {
+        // A redshift is a claim only when it names an epoch ("recombination at z ≈ 1100").
+        const epoch = pureNumberKind(near, n);
+        if (epoch && (epoch.kind === 'recombination' || epoch.kind === 'matterRadiationEquality' || epoch.kind === 'dragEpoch' || epoch.kind === 'accelerationOnset')) {
+          found.push({ kind: epoch.kind, value: n, angleArcsec: null, parameter: null, sinceEpoch: null, start: n.start, end: n.end, sentenceStart: sentence.start, sentenceEnd: sentence.end, cueDistance: epoch.distance });
+        }
+        return;
+      }
+
+      if (n.unit && n.unit.text.trim().startsWith('%')) {
+        const COMPONENT = /(baryon|cold dark matter|dark matter|dark energy|matter|radiation|neutrino)s?/i;
+        const clauseBefore = near.slice(Math.max(near.lastIndexOf(','), near.lastIndexOf(';')) + 1);
+        const clauseAfter = after.split(/[,;]/)[0];
+        const lastBefore = [...clauseBefore.matchAll(new RegExp(COMPONENT.source, 'gi'))].pop();
+        const component = lastBefore ?? COMPONENT.exec(clauseAfter);
+        if (component && /universe|budget|energy density|content|composition|made|consists|dark energy|dark matter/i.test(sentenceText)) {
+          found.push({ kind: 'compositionPercentage', value: n, angleArcsec: null, parameter: component[1].toLowerCase(), sinceEpoch: null, start: n.start, end: n.unit.end, sentenceStart: sentence.start, sentenceEnd: sentence.end, cueDistance: 0 });
+        }
+        return;
+      }
+
+      if (unit) {
+        const dims = unit.dimensions as unknown as Record<string, number>;
+        // Scales: length per angle.
+        if (dims.length === 1 && dims.angle === -1) {
+          const kind: ClaimKind = /comoving/i.test(near) ? 'comovingScale' : 'properScale';
+          found.push({ kind, value: n, angleArcsec: null, parameter: null, sinceEpoch: null, start: n.start, end: n.unit!.end, sentenceStart: sentence.start, sentenceEnd: sentence.end, cueDistance: 0 });
+          return;
+        }
+        // "1″ corresponds to 8.4 kpc": a length after an angle.
+        if (dims.length === 1 && Object.keys(dims).every((k) => k === 'length' || dims[k] === 0) && index > 0) {
+          const prev = numbers[index - 1];
+          const prevUnit = prev.unit?.unit;
+          const link = text.slice(prev.unit ? prev.unit.end : prev.end, n.start);
+          if (prevUnit && (prevUnit.dimensions.angle === 1) && /^\s*(?:corresponds? to|is|=|subtends|spans|maps to|equals|→)\s*(?:about |∼ ?|≈ ?|~ ?)?$/i.test(link)) {
+            const arcsec = prev.value * (prevUnit.factor / (Math.PI / 648_000));
+            const kind: ClaimKind = /comoving/i.test(near) ? 'comovingScale' : 'properScale';
+            found.push({ kind, value: n, angleArcsec: arcsec, parameter: null, sinceEpoch: null, start: n.start, end: n.unit!.end, sentenceStart: sentence.start, sentenceEnd: sentence.end, cueDistance: 0 });
+            return;
+          }
+        }
+        // The cue nearest before the number (or just after it: "6.6 Gpc for the luminosity distance").
+        let best: { kind: ClaimKind; distance: number } | null = null;
+        for (const cue of KIND_CUES) {
+          const volumeLike = cue.kind === 'comovingVolume' && dims.length === 3 && (dims.angle === 0 || dims.angle === -2);
+          if (!volumeLike && !dimensionsMatch(cue.dimension, dims)) continue;
+          const endBefore = lastMatchEnd(cue.pattern, before);
+          const distance = endBefore >= 0 ? before.length - endBefore : /^\s*(?:for the |as the |is the )?/.test(after) && cue.pattern.test(after.slice(0, 30)) ? 25 : -1;
+          if (distance < 0) continue;
+          if (!best || distance < best.distance) best = { kind: cue.kind, distance };
+        }
+        if (!best) {
+          // Unlabelled times and distances are common in prose ("8.4 kpc", "13.8 Gyr") but unbound: leave them.
+          return;
+        }
+        const afterUnit = text.slice(n.unit!.end, Math.min(sentence.end, n.unit!.end + 30));
+        const kind: ClaimKind = best.kind === 'age' && /^\s*(?:old\s*)?(?:today|now|at present|at z\s*=\s*0\b)/i.test(afterUnit) ? 'ageToday' : best.kind;
+        found.push({ kind, value: n, angleArcsec: null, parameter: null, sinceEpoch: null, start: n.start, end: n.unit!.end, sentenceStart: sentence.start, sentenceEnd: sentence.end, cueDistance: best.distance });
+        return;
+      }
+
+      if (!n.unit) {
+        const pure = pureNumberKind(near, n);
+        if (pure) {
+          const since = pure.kind === 'expansionFactor' && /recombination|decoupling|last[- ]scattering|CMB/i.test(sentenceText) ? 'recombination' : null;
+          found.push({ kind: pure.kind, value: n, angleArcsec: null, parameter: null, sinceEpoch: since, start: n.start, end: n.end, sentenceStart: sentence.start, sentenceEnd: sentence.end, cueDistance: pure.distance });
+        }
+      }
+    });
+
+    // Word numbers: "expanded a thousandfold".
+    for (const m of sentenceText.matchAll(/\b(ten|hundred|thousand|million)fold\b/gi)) {
+      const at = sentence.start + m.index!;
+      if (inSkip(at)) continue;
+      const value = { ten: 10, hundred: 100, thousand: 1000, million: 1e6 }[m[1].toLowerCase() as 'ten']!;
+      const n: StatedNumber = { value, start: at, end: at + m[0].length, digitsStart: at, digitsEnd: at + m[0].length, text: m[0], significantDigits: 1, resolution: value, qualifier: 'approximate', relation: null, uncertainty: null, range: null, unit: null };
+      const since = /recombination|decoupling|last[- ]scattering|CMB/i.test(sentenceText) ? 'recombination' : null;
+      found.push({ kind: 'expansionFactor', value: n, angleArcsec: null, parameter: null, sinceEpoch: since, start: n.start, end: n.end, sentenceStart: sentence.start, sentenceEnd: sentence.end, cueDistance: 0 });
+    }
+
+    // Bind the redshift-dependent claims.
+    const needing = found.filter((f) => NEEDS_REDSHIFT.has(f.kind) && f.sinceEpoch === null);
+    // An epoch stated as a redshift ("recombination at z ≈ 1100") is also the redshift of the
+    // sentence's other claims ("…when the universe was 3000 K").
+    const flat = mentions.flatMap((m) => [{ value: m.value, range: m.range, start: m.numberStart }, ...m.list.map((v, i) => ({ value: v, range: null, start: m.listNumberStarts[i] }))]);
+    const respectively = /respectively/i.test(sentenceText) && flat.length > 1 && flat.length === needing.length;
+    for (const f of found) {
+      let z: number | null = null;
+      let zRange: readonly [number, number] | null = null;
+      let zSource: RedshiftSource | null = null;
+      let unchecked: string | null = null;
+      let confidence = f.cueDistance < 40 ? 0.9 : 0.7;
+      if (!NEEDS_REDSHIFT.has(f.kind) || f.sinceEpoch) {
+        zSource = f.sinceEpoch ? 'epoch' : null;
+      } else if (respectively) {
+        const i = needing.indexOf(f);
+        z = flat[i].value;
+        zSource = 'respectively';
+      } else {
+        const distinct = [...new Set(flat.map((m) => (m.range ? `${m.range[0]}-${m.range[1]}` : String(m.value))))];
+        if (distinct.length === 1) {
+          const m = flat[0];
+          if (m.range && f.kind === 'comovingVolume') zRange = m.range;
+          else if (m.range) unchecked = 'the claim refers to a range of redshift';
+          else z = m.value;
+          zSource = 'sentence';
+        } else if (distinct.length > 1) {
+          // The nearest redshift before the claim in the same clause, if the clause has one.
+          const clauseStart = Math.max(sentence.start, text.lastIndexOf(';', f.start) + 1, text.lastIndexOf(', and', f.start) + 1);
+          const inClause = flat.filter((m) => m.start >= clauseStart && m.start < f.start);
+          const afterClaim = flat.filter((m) => m.start > f.start && !text.slice(f.end, m.start).includes(';'));
+          const pick = inClause.length ? inClause[inClause.length - 1] : afterClaim.length === 1 ? afterClaim[0] : null;
+          if (pick && !pick.range) {
+            z = pick.value;
+            zSource = 'sentence';
+            confidence -= 0.15;
+          } else unchecked = `the sentence names ${distinct.length} redshifts and the claim could be about any of them`;
+        } else if (previous && /\b(?:this|that|the same) redshift|there\b|at this distance/i.test(sentenceText) && previous.mentions.length === 1 && !previous.mentions[0].range) {
+          z = previous.mentions[0].value;
+          zSource = 'previous-sentence';
+          confidence -= 0.2;
+        } else if (previous && previous.mentions.length === 1 && !previous.mentions[0].range && previous.mentions[0].list.length === 0) {
+          z = previous.mentions[0].value;
+          zSource = 'previous-sentence';
+          confidence -= 0.3;
+        } else {
+          unchecked = 'no redshift is stated for this number';
+        }
+      }
+      if (f.value.qualifier === 'upper-bound' || f.value.qualifier === 'lower-bound') confidence -= 0.1;
+      claims.push({ ...withoutCue(f), z, zRange, zSource, confidence: Math.max(0.1, Math.min(1, confidence)), unchecked });
+    }
+    previous = { sentence, mentions };
+  }
+
+  claims.push(...tableClaims(doc, inSkip));
+  claims.sort((a, b) => a.start - b.start);
+  return { claims, declarations };
+}
+
+function withoutCue<T extends { cueDistance: number }>(f: T): Omit<T, 'cueDistance'> {
+  const { cueDistance: _unused, ...rest } = f;
+  void _unused;
+  return rest;
+}
+
+/** The epoch, growth or expansion-factor kind announced just before a pure number. */
+function pureNumberKind(near: string, n: StatedNumber): { kind: ClaimKind; distance: number } | null {
+  let best: { kind: ClaimKind; distance: number } | null = null;
+  for (const cue of PURE_NUMBER_CUES) {
+    const end = lastMatchEnd(cue.pattern, near);
+    if (end < 0) continue;
+    const distance = near.length - end;
+    if (distance > 45) continue;
+    if (!best || distance < best.distance) best = { kind: cue.kind, distance };
+  }
+  if (best && (best.kind === 'growthRate' || best.kind === 'growthFactor') && !(n.value > 0 && n.value < 2)) return null;
+  if (best && best.kind === 'expansionFactor' && n.value < 1.5) return null;
+  return best;
+}
+
+/** Claims in table cells: the kind from the column header, the redshift from the row's z column. */
+function tableClaims(doc: DocumentReading, inSkip: (pos: number) => boolean): Claim[] {
+  const text = doc.reading.text;
+  const cells = doc.blocks.filter((b) => b.kind === 'table-cell' && b.cell);
+  const out: Claim[] = [];
+  const byRow = new Map<string, typeof cells>();
+  for (const c of cells) {
+    const key = `${c.cell!.table}:${c.cell!.row}`;
+    byRow.set(key, [...(byRow.get(key) ?? []), c]);
+  }
+  for (const c of cells) {
+    const header = c.cell!.header;
+    if (!header || inSkip(c.start)) continue;
+    const headerKind = kindFromHeader(header);
+    if (!headerKind) continue;
+    const numbers = findNumbers(text, c.start, c.end);
+    if (numbers.length !== 1) continue;
+    const n = numbers[0];
+    const unitText = /\(([^)]+)\)|\[([^\]]+)\]/.exec(header);
+    const unit = n.unit ?? (unitText ? unitAt(unitText[1] ?? unitText[2], 0) : null);
+    const value: StatedNumber = unit && !n.unit ? { ...n, unit: { ...unit, start: c.start, end: c.start } } : n;
+    const row = byRow.get(`${c.cell!.table}:${c.cell!.row}`) ?? [];
+    const zCell = row.find((r) => r !== c && /^(?:z|z_\w+|redshift)\b/i.test((r.cell!.header ?? '').trim()));
+    const zNumbers = zCell ? findNumbers(text, zCell.start, zCell.end) : [];
+    const z = zNumbers.length === 1 ? zNumbers[0].value : null;
+    out.push({
+      kind: headerKind,
+      value,
+      z,
+      zRange: null,
+      zSource: z === null ? null : 'table-row',
+      angleArcsec: null,
+      parameter: null,
+      sinceEpoch: null,
+      start: n.start,
+      end: n.end,
+      sentenceStart: c.start,
+      sentenceEnd: c.end,
+      confidence: z === null ? 0.4 : 0.85,
+      unchecked: z === null && NEEDS_REDSHIFT.has(headerKind) ? 'the table row has no redshift column' : unit?.unit ? null : 'the column header gives no unit Comove knows',
+    });
+  }
+  return out;
+}
+
+function kindFromHeader(header: string): ClaimKind | null {
+  for (const cue of KIND_CUES) if (cue.pattern.test(header)) return cue.kind;
+  if (/scale|kpc\s*\/\s*(?:″|arcsec)/i.test(header)) return 'properScale';
+  return null;
+}
+
+export { findDeclarations };

@@ -1,0 +1,90 @@
+/**
+ * Redshifts as stated in reading text: "z = 1.2", "z ≈ 2", "z_s = 2.1", "redshift of 0.5",
+ * "redshifts 0.3 and 0.5", "1.5 < z < 2.5", "z = 2–3". Photometric-band uses ("z-band",
+ * "m_z", "z = 21.3 mag") and the named epochs (z_eq, z_*, z_drag) are not redshifts of objects.
+ */
+
+import { findNumbers, type StatedNumber } from './numberParser.js';
+
+export interface RedshiftMention {
+  /** The redshift, or the middle of a range. */
+  readonly value: number;
+  readonly range: readonly [number, number] | null;
+  /** Reading-text range of the mention (symbol to number). */
+  readonly start: number;
+  readonly end: number;
+  /** Where its number starts, to recognise it among the numbers of a sentence. */
+  readonly numberStart: number;
+  /** Further numbers in a list ("z = 0.3 and 0.5", "redshifts 1, 2 and 3"). */
+  readonly list: readonly number[];
+  readonly listNumberStarts: readonly number[];
+}
+
+/** The z symbol with an optional object subscript, then a relation. Epoch subscripts are excluded. */
+const Z_SYMBOL = /(?<![A-Za-z_\\])z(?:_\{?(?:s|src|source|l|lens|spec|phot|obs|gal|host|[A-Za-z]?\d*)\}?)?\s*(=|≈|∼|~|≃|<|>|≲|≳|≤|≥)\s*/g;
+const REDSHIFT_WORD = /\bredshifts?\s*(?:of\s*|z\s*(?:=|≈|∼|~)\s*|(?:=|≈|∼|~)\s*|around\s*|about\s*)?/gi;
+const RANGE_FORM = /(\d*\.?\d+)\s*(<|≤|≲)\s*z\s*(<|≤|≲)\s*(\d*\.?\d+)/g;
+const EPOCH_SUBSCRIPT = /^_\{?(?:eq|\*|rec|dec|d|drag|acc|t|re|reion|ion|max|min|peak|form|f)\b/;
+
+/** Every redshift mention in text[from, to). */
+export function findRedshifts(text: string, from = 0, to = text.length): RedshiftMention[] {
+  const slice = text.slice(from, to);
+  const numbers = findNumbers(text, from, to);
+  const numberAt = (pos: number) => numbers.find((n) => n.start >= pos && n.start <= pos + 1);
+  const out: RedshiftMention[] = [];
+  const taken = new Set<number>();
+
+  const add = (symbolStart: number, n: StatedNumber) => {
+    if (taken.has(n.start)) return;
+    if (n.unit && n.unit.text.trim() !== '') return; // "z = 21.3 mag": a magnitude
+    taken.add(n.start);
+    // A list continues with ", 0.5" / "and 0.5" right after.
+    const list: number[] = [];
+    const listStarts: number[] = [];
+    let end = n.end;
+    for (const next of numbers) {
+      if (next.start <= end) continue;
+      const gap = text.slice(end, next.start);
+      if (!/^\s*(?:,|and|,\s*and|or)\s*$/.test(gap) || next.unit) break;
+      list.push(next.value);
+      listStarts.push(next.start);
+      taken.add(next.start);
+      end = next.end;
+    }
+    out.push({
+      value: n.value,
+      range: n.range ? [n.range.low, n.range.high] : null,
+      start: symbolStart,
+      end,
+      numberStart: n.start,
+      list,
+      listNumberStarts: listStarts,
+    });
+  };
+
+  for (const m of slice.matchAll(RANGE_FORM)) {
+    const at = from + m.index!;
+    const low = Number(m[1]);
+    const high = Number(m[4]);
+    const first = numberAt(at);
+    const second = numbers.find((n) => n.start > at + m[1].length && n.start <= at + m[0].length);
+    if (first) taken.add(first.start);
+    if (second) taken.add(second.start);
+    out.push({ value: (low + high) / 2, range: [low, high], start: at, end: at + m[0].length, numberStart: first?.start ?? at, list: [], listNumberStarts: [] });
+  }
+  for (const m of slice.matchAll(Z_SYMBOL)) {
+    const at = from + m.index!;
+    const symbol = m[0];
+    if (EPOCH_SUBSCRIPT.test(symbol.slice(1))) continue;
+    // "z-band", "m_z": not a redshift
+    if (/[-_]$/.test(text.slice(Math.max(0, at - 1), at)) && text[at - 1] === '_') continue;
+    const n = numberAt(at + symbol.length);
+    if (n && m[1] !== '<' && m[1] !== '>' && m[1] !== '≤' && m[1] !== '≥' && m[1] !== '≲' && m[1] !== '≳') add(at, n);
+  }
+  for (const m of slice.matchAll(REDSHIFT_WORD)) {
+    const at = from + m.index!;
+    const n = numberAt(at + m[0].length);
+    if (n) add(at, n);
+  }
+  return out.sort((a, b) => a.start - b.start);
+}
