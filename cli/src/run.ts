@@ -2,6 +2,7 @@
 
 import { PRESETS } from '../../shared/src/index.js';
 import { CALC_HELP, runCalc } from './calcCommand.js';
+import { EXTRACT_HELP, runExtract } from './extractCommand.js';
 import { alignColumns } from './format.js';
 import { EXIT, UsageError, type CliIo } from './io.js';
 
@@ -13,6 +14,7 @@ Usage: comove <command> [options]
 
 Commands:
   calc      quantities of a parameter set at given redshifts (comove calc --help)
+  extract   the declarations and claims Comove reads in manuscripts (comove extract --help)
   presets   list the published parameter sets known by name
 
   --help, --version
@@ -34,6 +36,8 @@ export function runCli(argv: string[], io: CliIo): number {
         return EXIT.ok;
       case 'calc':
         return runCalc(rest, io);
+      case 'extract':
+        return runExtract(rest, io);
       case 'presets':
         io.stdout(alignColumns(PRESETS.map((p) => [p.name, p.title, p.source + (p.fromMemory ? ' (values quoted from memory)' : '')])).join('\n') + '\n');
         return EXIT.ok;
@@ -48,7 +52,7 @@ export function runCli(argv: string[], io: CliIo): number {
     // parseArgs reports unknown or malformed options with a TypeError carrying a code.
     const code = (e as { code?: string }).code;
     if (typeof code === 'string' && code.startsWith('ERR_PARSE_ARGS')) {
-      io.stderr(`comove: ${(e as Error).message}\n${command === 'calc' ? `\n${CALC_HELP}` : ''}`);
+      io.stderr(`comove: ${(e as Error).message}\n${command === 'calc' ? `\n${CALC_HELP}` : command === 'extract' ? `\n${EXTRACT_HELP}` : ''}`);
       return EXIT.usage;
     }
     throw e;

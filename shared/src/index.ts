@@ -3,3 +3,5 @@
  * Text and numbers in, plain data out.
  */
 export * from './cosmology/index.js';
+export * from './reader/index.js';
+export * from './claims/index.js';

@@ -318,4 +318,4 @@ function kindFromHeader(header: string): ClaimKind | null {
   return null;
 }
 
-export { findDeclarations };
+
