@@ -46,7 +46,9 @@ export interface ClaimScan {
 }
 
 /** Contexts in which a number with a unit is not a cosmological claim. */
-const NOT_A_CLAIM = /parallax|Gaia|Milky Way|Galactic|nearby star|aperture|seeing|FWHM|PSF|resolution of|pixel|slit|beam|wavelength|λ|strain|posterior|credible|gravitational[- ]wave|GW\d|H\s*II|\brest[- ]frame\b/i;
+const NOT_A_CLAIM = /parallax|Gaia|Milky Way|Galactic|nearby star|aperture|seeing|FWHM|PSF|pixel|slit|beam|wavelength|λ|strain|posterior|credible|gravitational[- ]wave|GW\d|H\s*II|\brest[- ]frame\b/i;
+/** What stands between an angle and the length it subtends: "1″ corresponds to", "the 3.2″ separation is", "0.4″ resolution … resolves". */
+const ANGLE_TO_LENGTH = /^\s*(?:[A-Za-z]+\s+){0,4}(?:corresponds?\s+to|is|are|=|subtends|spans|resolves|maps\s+to|equals|of|→)\s*(?:about |roughly |∼ ?|≈ ?|~ ?)?$/i;
 const MEASURED = /\b(?:we (?:measure|find|obtain|infer|derive|constrain)|measured|posterior|best[- ]fit|credible)\b/i;
 
 function lastMatchEnd(re: RegExp, text: string): number {
@@ -73,8 +75,13 @@ export function extractClaims(doc: DocumentReading): ClaimScan {
   const cellBlocks = new Set(doc.blocks.filter((b) => b.kind === 'table-cell'));
 
   let previous: { sentence: Sentence; mentions: RedshiftMention[] } | null = null;
+  /** Redshifts of named objects ("LDS-B1 lies at z = 0.512"), for later sentences that name them again. */
+  const objectRedshifts = new Map<string, number>();
+  /** The one redshift the paragraph is about so far, if it has named exactly one. */
+  let context: { block: unknown; z: number } | null = null;
   for (const sentence of doc.sentences) {
     const block = doc.blocks.find((b) => b.start <= sentence.start && sentence.end <= b.end);
+    if (context && context.block !== block) context = null;
     if (block && cellBlocks.has(block)) continue; // table cells are read by the table pass
     const mentions = findRedshifts(text, sentence.start, sentence.end);
     const numbers = findNumbers(text, sentence.start, sentence.end);
@@ -95,8 +102,8 @@ export function extractClaims(doc: DocumentReading): ClaimScan {
         }
         return;
       }
-      const windowStart = Math.max(sentence.start, index > 0 ? Math.min(numbers[index - 1].start, n.start) - 60 : sentence.start);
-      const before = text.slice(windowStart, n.start);
+      // Everything before the number in its sentence; the nearest cue wins.
+      const before = text.slice(sentence.start, n.start);
       const near = text.slice(Math.max(sentence.start, n.start - 90), n.start);
       const after = text.slice(n.end, Math.min(sentence.end, n.end + 40));
       // "4.4 and 6.1 kpc": a number without a unit shares the unit of the next one in a list.
@@ -140,12 +147,28 @@ export function extractClaims(doc: DocumentReading): ClaimScan {
           const prev = numbers[index - 1];
           const prevUnit = prev.unit?.unit;
           const link = text.slice(prev.unit ? prev.unit.end : prev.end, n.start);
-          if (prevUnit && (prevUnit.dimensions.angle === 1) && /^\s*(?:corresponds? to|is|=|subtends|spans|maps to|equals|→)\s*(?:about |∼ ?|≈ ?|~ ?)?$/i.test(link)) {
+          if (prevUnit && (prevUnit.dimensions.angle === 1) && ANGLE_TO_LENGTH.test(link)) {
             const arcsec = prev.value * (prevUnit.factor / (Math.PI / 648_000));
             const kind: ClaimKind = /comoving/i.test(near) ? 'comovingScale' : 'properScale';
             found.push({ kind, value: n, angleArcsec: arcsec, parameter: null, sinceEpoch: null, start: n.start, end: n.unit!.end, sentenceStart: sentence.start, sentenceEnd: sentence.end, cueDistance: 0 });
             return;
           }
+        }
+        // "4.4 and 6.1 kpc …, which corresponds to 1.0″": an angle after the lengths.
+        if (dims.length === 1 && Object.keys(dims).every((k) => k === 'length' || dims[k] === 0)) {
+          const angle = numbers.slice(index + 1).find((m) => m.unit?.unit?.dimensions.angle === 1);
+          if (angle && /(?:corresponds?|correspond)\s+to\s*$|subtends?\s*$/i.test(text.slice(n.unit!.end, angle.start))) {
+            const arcsec = angle.value * (angle.unit!.unit!.factor / (Math.PI / 648_000));
+            const kind: ClaimKind = /comoving/i.test(near) ? 'comovingScale' : 'properScale';
+            found.push({ kind, value: n, angleArcsec: arcsec, parameter: null, sinceEpoch: null, start: n.start, end: n.unit!.end, sentenceStart: sentence.start, sentenceEnd: sentence.end, cueDistance: 0 });
+            return;
+          }
+        }
+        // "one arcsecond corresponds to 5.5 kpc"
+        if (dims.length === 1 && Object.keys(dims).every((k) => k === 'length' || dims[k] === 0) && /\b(?:one|an|each|a single)\s+(?:arcsec(?:ond)?|″)\s+(?:corresponds?\s+to|is|spans|equals)\s*(?:about |roughly |∼ ?|≈ ?|~ ?)?$/i.test(near)) {
+          const kind: ClaimKind = /comoving/i.test(near) ? 'comovingScale' : 'properScale';
+          found.push({ kind, value: n, angleArcsec: 1, parameter: null, sinceEpoch: null, start: n.start, end: n.unit!.end, sentenceStart: sentence.start, sentenceEnd: sentence.end, cueDistance: 0 });
+          return;
         }
         // The cue nearest before the number (or just after it: "6.6 Gpc for the luminosity distance").
         let best: { kind: ClaimKind; distance: number } | null = null;
@@ -162,7 +185,12 @@ export function extractClaims(doc: DocumentReading): ClaimScan {
           return;
         }
         const afterUnit = text.slice(n.unit!.end, Math.min(sentence.end, n.unit!.end + 30));
-        const kind: ClaimKind = best.kind === 'age' && /^\s*(?:old\s*)?(?:today|now|at present|at z\s*=\s*0\b)/i.test(afterUnit) ? 'ageToday' : best.kind;
+        let kind: ClaimKind = best.kind;
+        // Words right after a time decide it: "12.6 Gyr ago", "4.8 Gyr old (today)".
+        if (dims.time === 1 && /^\s*ago\b/i.test(afterUnit)) kind = 'lookbackTime';
+        else if (dims.time === 1 && /^\s*old\b/i.test(afterUnit) && kind === 'lookbackTime') kind = 'age';
+        const clauseBefore = before.slice(Math.max(before.lastIndexOf(';'), before.lastIndexOf(',')) + 1);
+        if (kind === 'age' && (/^\s*(?:old\s*)?(?:today|now|at present|at z\s*=\s*0\b)/i.test(afterUnit) || /\b(?:today|now|at present|presently|currently)\b/i.test(clauseBefore))) kind = 'ageToday';
         found.push({ kind, value: n, angleArcsec: null, parameter: null, sinceEpoch: null, start: n.start, end: n.unit!.end, sentenceStart: sentence.start, sentenceEnd: sentence.end, cueDistance: best.distance });
         return;
       }
@@ -176,12 +204,14 @@ export function extractClaims(doc: DocumentReading): ClaimScan {
       }
     });
 
-    // Word numbers: "expanded a thousandfold".
-    for (const m of sentenceText.matchAll(/\b(ten|hundred|thousand|million)fold\b/gi)) {
+    // Word numbers: "expanded a thousandfold", "the universe has tripled in size".
+    for (const m of sentenceText.matchAll(/\b(ten|hundred|thousand|million)fold\b|\b(doubled|tripled|quadrupled)\b(?=\s+(?:in size|its size))/gi)) {
       const at = sentence.start + m.index!;
       if (inSkip(at)) continue;
-      const value = { ten: 10, hundred: 100, thousand: 1000, million: 1e6 }[m[1].toLowerCase() as 'ten']!;
-      const n: StatedNumber = { value, start: at, end: at + m[0].length, digitsStart: at, digitsEnd: at + m[0].length, text: m[0], significantDigits: 1, resolution: value, qualifier: 'approximate', relation: null, uncertainty: null, range: null, unit: null };
+      const word = (m[1] ?? m[2]).toLowerCase();
+      const value = ({ ten: 10, hundred: 100, thousand: 1000, million: 1e6, doubled: 2, tripled: 3, quadrupled: 4 } as Record<string, number>)[word];
+      const exact = m[2] !== undefined;
+      const n: StatedNumber = { value, start: at, end: at + m[0].length, digitsStart: at, digitsEnd: at + m[0].length, text: m[0], significantDigits: 1, resolution: exact ? 1 : value, qualifier: exact ? 'exact' : 'approximate', relation: null, uncertainty: null, range: null, unit: null };
       const since = /recombination|decoupling|last[- ]scattering|CMB/i.test(sentenceText) ? 'recombination' : null;
       found.push({ kind: 'expansionFactor', value: n, angleArcsec: null, parameter: null, sinceEpoch: since, start: n.start, end: n.end, sentenceStart: sentence.start, sentenceEnd: sentence.end, cueDistance: 0 });
     }
@@ -191,7 +221,12 @@ export function extractClaims(doc: DocumentReading): ClaimScan {
     // An epoch stated as a redshift ("recombination at z ≈ 1100") is also the redshift of the
     // sentence's other claims ("…when the universe was 3000 K").
     const flat = mentions.flatMap((m) => [{ value: m.value, range: m.range, start: m.numberStart }, ...m.list.map((v, i) => ({ value: v, range: null, start: m.listNumberStarts[i] }))]);
-    const respectively = /respectively/i.test(sentenceText) && flat.length > 1 && flat.length === needing.length;
+    // Ordered pairing: "…, respectively", or as many claims of one kind as redshifts ("at z = 0.3
+    // and z = 0.5 … 4.4 and 6.1 kpc … at each redshift").
+    const sameKind = needing.length > 1 && needing.every((f) => f.kind === needing[0].kind);
+    const respectively = flat.length > 1 && flat.length === needing.length && (/respectively|\beach\b/i.test(sentenceText) || sameKind);
+    // Epochs stated as redshifts in this sentence ("recombination at z_* ≈ 1090, when the universe was 372,000 years old").
+    const epochRedshifts = found.filter((f) => f.kind === 'recombination' || f.kind === 'matterRadiationEquality' || f.kind === 'dragEpoch' || f.kind === 'accelerationOnset');
     for (const f of found) {
       let z: number | null = null;
       let zRange: readonly [number, number] | null = null;
@@ -223,6 +258,11 @@ export function extractClaims(doc: DocumentReading): ClaimScan {
             zSource = 'sentence';
             confidence -= 0.15;
           } else unchecked = `the sentence names ${distinct.length} redshifts and the claim could be about any of them`;
+        } else if (epochRedshifts.some((e) => e.start < f.start)) {
+          const epoch = epochRedshifts.filter((e) => e.start < f.start).pop()!;
+          z = epoch.value.value;
+          zSource = 'epoch';
+          confidence -= 0.1;
         } else if (previous && /\b(?:this|that|the same) redshift|there\b|at this distance/i.test(sentenceText) && previous.mentions.length === 1 && !previous.mentions[0].range) {
           z = previous.mentions[0].value;
           zSource = 'previous-sentence';
@@ -231,6 +271,17 @@ export function extractClaims(doc: DocumentReading): ClaimScan {
           z = previous.mentions[0].value;
           zSource = 'previous-sentence';
           confidence -= 0.3;
+        } else if (context) {
+          z = context.z;
+          zSource = 'previous-sentence';
+          confidence -= 0.35;
+        } else if (namedObjects(sentenceText).some((o) => objectRedshifts.has(o))) {
+          const names = [...new Set(namedObjects(sentenceText).filter((o) => objectRedshifts.has(o)).map((o) => objectRedshifts.get(o)!))];
+          if (names.length === 1) {
+            z = names[0];
+            zSource = 'previous-sentence';
+            confidence -= 0.3;
+          } else unchecked = 'the sentence names several objects with different redshifts';
         } else {
           unchecked = 'no redshift is stated for this number';
         }
@@ -239,11 +290,22 @@ export function extractClaims(doc: DocumentReading): ClaimScan {
       claims.push({ ...withoutCue(f), z, zRange, zSource, confidence: Math.max(0.1, Math.min(1, confidence)), unchecked });
     }
     previous = { sentence, mentions };
+    const distinctHere = [...new Set(flat.filter((m) => !m.range).map((m) => m.value))];
+    if (distinctHere.length === 1 && !flat.some((m) => m.range)) {
+      context = { block, z: distinctHere[0] };
+      for (const name of namedObjects(sentenceText)) objectRedshifts.set(name, distinctHere[0]);
+    }
+    else if (distinctHere.length > 1 || flat.some((m) => m.range)) context = null;
   }
 
   claims.push(...tableClaims(doc, inSkip));
   claims.sort((a, b) => a.start - b.start);
   return { claims, declarations };
+}
+
+/** Names of objects in a sentence: catalogue-style identifiers such as LDS-B1, Ember-3, J1234+56. */
+function namedObjects(sentence: string): string[] {
+  return [...sentence.matchAll(/\b[A-Z][A-Za-z]*[-–][A-Z]?\d+[A-Za-z]?\b|\b[A-Z]{1,4}\d{3,}[+-]?\d*\b/g)].map((m) => m[0]);
 }
 
 function withoutCue<T extends { cueDistance: number }>(f: T): Omit<T, 'cueDistance'> {
@@ -264,6 +326,7 @@ function pureNumberKind(near: string, n: StatedNumber): { kind: ClaimKind; dista
   }
   if (best && (best.kind === 'growthRate' || best.kind === 'growthFactor') && !(n.value > 0 && n.value < 2)) return null;
   if (best && best.kind === 'expansionFactor' && n.value < 1.5) return null;
+  if (best && best.kind === 'distanceModulus' && !(n.value > 10 && n.value < 70)) return null;
   return best;
 }
 

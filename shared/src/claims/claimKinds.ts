@@ -79,4 +79,5 @@ export const PURE_NUMBER_CUES: ReadonlyArray<{ kind: ClaimKind; pattern: RegExp 
   { kind: 'growthRate', pattern: /growth rate|f\s*\(\s*z|\bf\s*=/i },
   { kind: 'growthFactor', pattern: /growth factor|D\s*\(\s*z|\bD_?\+/i },
   { kind: 'expansionFactor', pattern: /expanded|expansion factor|factor of|fold|times (?:larger|bigger)|1\s*\+\s*z/i },
+  { kind: 'distanceModulus', pattern: /\bdm\b|distance modul(?:us|i)|\bm\s*[-−]\s*M\b|\bμ\b|\bDM\b/i },
 ];

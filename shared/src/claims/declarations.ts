@@ -228,6 +228,7 @@ export function parameterStatements(text: string, from: number, to: number): Sta
     const c = text[p];
     if (c !== 'H' && c !== 'Ω' && c !== 'ω' && c !== 'w' && c !== 'T' && c !== 'N' && c !== 'Σ' && c !== '∑' && c !== 'm' && c !== 'h' && c !== '(') continue;
     if (p > from && /[A-Za-z0-9]/.test(text[p - 1]) && c !== 'Ω' && c !== 'ω') continue;
+    if (p > from && text[p - 1] === '/') continue; // cz/H_0: a ratio, not a statement of H0
     if (c === '(') {
       const tuple = tupleAt(text, p, to);
       if (tuple) {

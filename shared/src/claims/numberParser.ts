@@ -132,10 +132,11 @@ export function unitAt(text: string, pos: number): StatedUnit | null {
     const m = re.exec(rest);
     if (m) return { text: m[0], start: p, end: p + m[0].length, unit: spelled === '%' ? null : okUnit(spelled) };
   }
-  // Symbol units right after the number: ″ ′ ° (1.5″, 10°).
-  if (/^[″′°]/.test(rest)) {
-    const spelled = rest[0] === '″' ? 'arcsec' : rest[0] === '′' ? 'arcmin' : 'deg';
-    return { text: rest[0], start: p, end: p + 1, unit: okUnit(spelled) };
+  // Symbol units right after the number: ″ ′ ° (1.5″, 10°), also as superscripts (1.0^′′).
+  const mark = /^\^*\s*(″|′′|''|′|°|∘)/.exec(rest);
+  if (mark) {
+    const spelled = mark[1] === '′' ? 'arcmin' : mark[1] === '°' || mark[1] === '∘' ? 'deg' : 'arcsec';
+    return { text: mark[0], start: p, end: p + mark[0].length, unit: okUnit(spelled) };
   }
   // A sequence of unit tokens joined by spaces, '/', '·' or '×'.
   let q = p;
@@ -158,6 +159,13 @@ export function unitAt(text: string, pos: number): StatedUnit | null {
   if (perAngle) {
     pieces.push(`/${perAngle[1] === '″' || perAngle[1] === "''" || perAngle[1] === 'arcsec' ? 'arcsec' : 'arcmin'}`);
     lastEnd += perAngle[0].length;
+    written = text.slice(p, lastEnd);
+  }
+  // Per unit of sky: "per square degree", "/deg^2".
+  const perArea = /^\s*(?:per|\/)\s*(?:square degree|sq\.? ?deg(?:ree)?|deg\s*\^?\s*2|deg²)/i.exec(text.slice(lastEnd, lastEnd + 20));
+  if (perArea) {
+    pieces.push(' deg^-2');
+    lastEnd += perArea[0].length;
     written = text.slice(p, lastEnd);
   }
   const spelled = normaliseExponent(pieces.join(''))

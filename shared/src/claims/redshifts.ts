@@ -21,9 +21,11 @@ export interface RedshiftMention {
 }
 
 /** The z symbol with an optional object subscript, then a relation. Epoch subscripts are excluded. */
-const Z_SYMBOL = /(?<![A-Za-z_\\])z(?:_\{?(?:s|src|source|l|lens|spec|phot|obs|gal|host|[A-Za-z]?\d*)\}?)?\s*(=|≈|∼|~|≃|<|>|≲|≳|≤|≥)\s*/g;
+const Z_SYMBOL = /(?<![A-Za-z_\\])z(?:_\{?[A-Za-z0-9,]{1,8}\}?)?\s*(=|≈|∼|~|≃|<|>|≲|≳|≤|≥)\s*/g;
 const REDSHIFT_WORD = /\bredshifts?\s*(?:of\s*|z\s*(?:=|≈|∼|~)\s*|(?:=|≈|∼|~)\s*|around\s*|about\s*)?/gi;
 const RANGE_FORM = /(\d*\.?\d+)\s*(<|≤|≲)\s*z\s*(<|≤|≲)\s*(\d*\.?\d+)/g;
+/** "between z = 2 and z = 3", "from z = 2 to 3". */
+const BETWEEN_FORM = /(?:between|from)\s+(?:redshifts?\s+|z\s*=\s*)(\d*\.?\d+)\s+(?:and|to)\s+(?:z\s*=\s*)?(\d*\.?\d+)/gi;
 const EPOCH_SUBSCRIPT = /^_\{?(?:eq|\*|rec|dec|d|drag|acc|t|re|reion|ion|max|min|peak|form|f)\b/;
 
 /** Every redshift mention in text[from, to). */
@@ -71,6 +73,15 @@ export function findRedshifts(text: string, from = 0, to = text.length): Redshif
     if (first) taken.add(first.start);
     if (second) taken.add(second.start);
     out.push({ value: (low + high) / 2, range: [low, high], start: at, end: at + m[0].length, numberStart: first?.start ?? at, list: [], listNumberStarts: [] });
+  }
+  for (const m of slice.matchAll(BETWEEN_FORM)) {
+    const at = from + m.index!;
+    const inside = numbers.filter((n) => n.start >= at && n.end <= at + m[0].length);
+    if (inside.length < 2) continue;
+    for (const n of inside) taken.add(n.start);
+    const low = Number(m[1]);
+    const high = Number(m[2]);
+    out.push({ value: (low + high) / 2, range: [low, high], start: at, end: at + m[0].length, numberStart: inside[0].start, list: [], listNumberStarts: [] });
   }
   for (const m of slice.matchAll(Z_SYMBOL)) {
     const at = from + m.index!;
