@@ -58,3 +58,34 @@ export function syntheticLatexManuscript(bytes: number): string {
   for (let i = 0; out.length < bytes; i++) out += section(i);
   return out + '\n\\end{document}\n';
 }
+
+function markdownSection(i: number): string {
+  const z = (0.3 + (i % 37) * 0.11).toFixed(2);
+  const d = (1000 + ((i * 373) % 9000)).toFixed(0);
+  const t = (2 + ((i * 7) % 100) / 10).toFixed(1);
+  return `
+## Field ${i}: targets
+
+The brightest pair lies at $z = ${z}$, where the luminosity distance is $D_L \\approx ${d}$ Mpc and
+one arcsecond corresponds to ${(5 + (i % 40) / 10).toFixed(1)} kpc; the light left it about **${t} Gyr** ago.
+We request ${3 + (i % 5)} hours (run \`L${i}\`) with a seeing better than 0.8″.${i % 25 === 0 ? `[^f${i}]` : ''}
+
+| Target | $z$ | $D_L$ (Mpc) | lookback time (Gyr) |
+|--------|-----|-------------|---------------------|
+| L${i}-a | ${z} | ${d} | ${t} |
+| L${i}-b | 1.274 | 9154 | 8.9 |
+
+$$
+D_L(z) = (1+z)\\,\\frac{c}{H_0}\\int_0^z \\frac{dz'}{E(z')}
+$$
+
+${i % 25 === 0 ? `[^f${i}]: Magnitudes are AB; ${12 + (i % 30)} pairs lie at $z > 2$.` : `Magnitudes are AB; ${12 + (i % 30)} pairs lie at $z > 2$.`}
+`;
+}
+
+/** A Markdown proposal of at least `bytes` characters. */
+export function syntheticMarkdownManuscript(bytes: number): string {
+  let out = '---\ntitle: Lantern follow-up\ncosmology: H0=70 Omega_m=0.3 flat\n---\n\n# Science case\n';
+  for (let i = 0; out.length < bytes; i++) out += markdownSection(i);
+  return out;
+}

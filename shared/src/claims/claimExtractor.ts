@@ -10,6 +10,7 @@
 import type { DocumentReading, Sentence } from '../reader/documentReading.js';
 import { KIND_CUES, NEEDS_REDSHIFT, PURE_NUMBER_CUES, type ClaimKind } from './claimKinds.js';
 import { findDeclarations, parameterStatements, type Declaration, type DeclarationScan } from './declarations.js';
+import type { Unit } from '../cosmology/units.js';
 import { findNumbers, unitAt, type StatedNumber } from './numberParser.js';
 import { findRedshifts, type RedshiftMention } from './redshifts.js';
 
@@ -51,11 +52,30 @@ const NOT_A_CLAIM = /parallax|Gaia|Milky Way|Galactic|nearby star|aperture|seein
 const ANGLE_TO_LENGTH = /^\s*(?:[A-Za-z]+\s+){0,4}(?:corresponds?\s+to|is|are|=|subtends|spans|resolves|maps\s+to|equals|of|→)\s*(?:about |roughly |∼ ?|≈ ?|~ ?)?$/i;
 const MEASURED = /\b(?:we (?:measure|find|obtain|infer|derive|constrain)|measured|posterior|best[- ]fit|credible)\b/i;
 
+/** Global copies of the cue patterns, made once (matchAll needs the g flag). */
+const GLOBAL_PATTERNS = new Map<RegExp, RegExp>(
+  [...KIND_CUES.map((c) => c.pattern), ...PURE_NUMBER_CUES.map((c) => c.pattern)].map((re) => [re, new RegExp(re.source, re.flags.includes('g') ? re.flags : re.flags + 'g')]),
+);
+
+/** End of the last match of `re` in `text`, or −1. */
 function lastMatchEnd(re: RegExp, text: string): number {
-  const g = new RegExp(re.source, re.flags.includes('g') ? re.flags : re.flags + 'g');
+  const g = GLOBAL_PATTERNS.get(re) ?? new RegExp(re.source, re.flags.includes('g') ? re.flags : re.flags + 'g');
   let end = -1;
   for (const m of text.matchAll(g)) end = m.index! + m[0].length;
   return end;
+}
+
+/** Whether pos lies in one of the ranges, sorted by start and not overlapping much (binary search, then a short scan back). */
+function inRanges(ranges: ReadonlyArray<{ start: number; end: number }>, pos: number): boolean {
+  let lo = 0;
+  let hi = ranges.length;
+  while (lo < hi) {
+    const mid = (lo + hi) >> 1;
+    if (ranges[mid].start <= pos) lo = mid + 1;
+    else hi = mid;
+  }
+  for (let i = lo - 1; i >= 0 && i >= lo - 8; i--) if (pos >= ranges[i].start && pos < ranges[i].end) return true;
+  return false;
 }
 
 function dimensionsMatch(want: Partial<Record<string, number>> | null, got: Record<string, number>): boolean {
@@ -66,13 +86,15 @@ function dimensionsMatch(want: Partial<Record<string, number>> | null, got: Reco
 
 /** Extracts the claims of a document. Never throws. */
 export function extractClaims(doc: DocumentReading): ClaimScan {
-  const declarations = findDeclarations(doc);
+  const units = new Map<string, Unit | null>();
+  const declarations = findDeclarations(doc, units);
   const text = doc.reading.text;
   const claims: Claim[] = [];
-  const inSkip = (pos: number) => declarations.skips.some((s) => pos >= s.start && pos < s.end);
-  const declared = declarations.declarations.filter((d) => d.origin === 'prose');
-  const inDeclaration = (pos: number) => declared.some((d: Declaration) => pos >= d.start && pos < d.end);
-  const cellBlocks = new Set(doc.blocks.filter((b) => b.kind === 'table-cell'));
+  const skips = [...declarations.skips].sort((a, b) => a.start - b.start);
+  const inSkip = (pos: number) => inRanges(skips, pos);
+  const declared = declarations.declarations.filter((d: Declaration) => d.origin === 'prose').sort((a, b) => a.start - b.start);
+  const inDeclaration = (pos: number) => inRanges(declared, pos);
+  let blockIndex = 0;
 
   let previous: { sentence: Sentence; mentions: RedshiftMention[] } | null = null;
   /** Redshifts of named objects ("LDS-B1 lies at z = 0.512"), for later sentences that name them again. */
@@ -80,13 +102,14 @@ export function extractClaims(doc: DocumentReading): ClaimScan {
   /** The one redshift the paragraph is about so far, if it has named exactly one. */
   let context: { block: unknown; z: number } | null = null;
   for (const sentence of doc.sentences) {
-    const block = doc.blocks.find((b) => b.start <= sentence.start && sentence.end <= b.end);
+    while (blockIndex < doc.blocks.length && doc.blocks[blockIndex].end < sentence.end) blockIndex++;
+    const block = doc.blocks[blockIndex];
     if (context && context.block !== block) context = null;
-    if (block && cellBlocks.has(block)) continue; // table cells are read by the table pass
-    const mentions = findRedshifts(text, sentence.start, sentence.end);
-    const numbers = findNumbers(text, sentence.start, sentence.end);
+    if (block && block.kind === 'table-cell') continue; // table cells are read by the table pass
+    const numbers = findNumbers(text, sentence.start, sentence.end, units);
+    const mentions = findRedshifts(text, sentence.start, sentence.end, numbers);
     const redshiftNumbers = new Set<number>([...mentions.map((m) => m.numberStart), ...mentions.flatMap((m) => m.listNumberStarts)]);
-    const statementRanges = parameterStatements(text, sentence.start, sentence.end);
+    const statementRanges = parameterStatements(text, sentence.start, sentence.end, numbers);
     const sentenceText = text.slice(sentence.start, sentence.end);
     const measured = MEASURED.test(sentenceText) && !/\badopt|\bassum/i.test(sentenceText);
 
@@ -298,7 +321,7 @@ export function extractClaims(doc: DocumentReading): ClaimScan {
     else if (distinctHere.length > 1 || flat.some((m) => m.range)) context = null;
   }
 
-  claims.push(...tableClaims(doc, inSkip));
+  claims.push(...tableClaims(doc, inSkip, units));
   claims.sort((a, b) => a.start - b.start);
   return { claims, declarations };
 }
@@ -331,29 +354,31 @@ function pureNumberKind(near: string, n: StatedNumber): { kind: ClaimKind; dista
 }
 
 /** Claims in table cells: the kind from the column header, the redshift from the row's z column. */
-function tableClaims(doc: DocumentReading, inSkip: (pos: number) => boolean): Claim[] {
+function tableClaims(doc: DocumentReading, inSkip: (pos: number) => boolean, units: Map<string, Unit | null>): Claim[] {
   const text = doc.reading.text;
   const cells = doc.blocks.filter((b) => b.kind === 'table-cell' && b.cell);
   const out: Claim[] = [];
   const byRow = new Map<string, typeof cells>();
   for (const c of cells) {
     const key = `${c.cell!.table}:${c.cell!.row}`;
-    byRow.set(key, [...(byRow.get(key) ?? []), c]);
+    const row = byRow.get(key);
+    if (row) row.push(c);
+    else byRow.set(key, [c]);
   }
   for (const c of cells) {
     const header = c.cell!.header;
     if (!header || inSkip(c.start)) continue;
     const headerKind = kindFromHeader(header);
     if (!headerKind) continue;
-    const numbers = findNumbers(text, c.start, c.end);
+    const numbers = findNumbers(text, c.start, c.end, units);
     if (numbers.length !== 1) continue;
     const n = numbers[0];
     const unitText = /\(([^)]+)\)|\[([^\]]+)\]/.exec(header);
-    const unit = n.unit ?? (unitText ? unitAt(unitText[1] ?? unitText[2], 0) : null);
+    const unit = n.unit ?? (unitText ? unitAt(unitText[1] ?? unitText[2], 0, units) : null);
     const value: StatedNumber = unit && !n.unit ? { ...n, unit: { ...unit, start: c.start, end: c.start } } : n;
     const row = byRow.get(`${c.cell!.table}:${c.cell!.row}`) ?? [];
     const zCell = row.find((r) => r !== c && /^(?:z|z_\w+|redshift)\b/i.test((r.cell!.header ?? '').trim()));
-    const zNumbers = zCell ? findNumbers(text, zCell.start, zCell.end) : [];
+    const zNumbers = zCell ? findNumbers(text, zCell.start, zCell.end, units) : [];
     const z = zNumbers.length === 1 ? zNumbers[0].value : null;
     out.push({
       kind: headerKind,

@@ -16,7 +16,8 @@ import type { ParameterInput, ParameterKey } from '../cosmology/parameters.js';
 import { parseParameterText, mergeWithPreset } from '../cosmology/parameterText.js';
 import { findPreset, type Preset } from '../cosmology/presets.js';
 import { CITATION_OPEN, INJECTED_VALUE, type DocumentReading } from '../reader/documentReading.js';
-import { findNumbers } from './numberParser.js';
+import type { Unit } from '../cosmology/units.js';
+import { findNumbers, type StatedNumber } from './numberParser.js';
 
 export type DeclarationOrigin = 'directive' | 'front-matter' | 'prose' | 'named-set';
 export type DeclarationRole = 'document' | 'local' | 'other-model';
@@ -102,7 +103,7 @@ interface Statement {
 }
 
 /** Scans a document for declarations, skip regions and declaration problems. Never throws. */
-export function findDeclarations(doc: DocumentReading): DeclarationScan {
+export function findDeclarations(doc: DocumentReading, unitCache?: Map<string, Unit | null>): DeclarationScan {
   const text = doc.reading.text;
   const declarations: Declaration[] = [];
   const problems: DeclarationProblem[] = [];
@@ -154,7 +155,9 @@ export function findDeclarations(doc: DocumentReading): DeclarationScan {
   for (const s of doc.sentences) {
     const sentence = text.slice(s.start, s.end);
     const cue = DECLARATION_CUE.test(sentence);
-    const statements = parameterStatements(text, s.start, s.end);
+    // Only sentences with a parameter symbol, a cue or a named set can declare anything.
+    if (!/[HΩωwTNΣ∑mh]|Planck|WMAP|⟦/.test(sentence)) continue;
+    const statements = parameterStatements(text, s.start, s.end, findNumbers(text, s.start, s.end, unitCache));
     const flat = /\bflat\b|spatially flat|Ω_?k\s*=\s*0(?![.\d])|zero curvature/i.test(sentence);
     const lambdaFromMatter = /Ω_?(?:Λ|λ|L)\S*\s*=\s*1\s*[-−]\s*Ω_?(?:m|M)/.exec(sentence);
     const named = namedSet(sentence);
@@ -220,9 +223,9 @@ export function findDeclarations(doc: DocumentReading): DeclarationScan {
 }
 
 /** Parameter statements (symbol, relation, number) in text[from, to), including tuples. */
-export function parameterStatements(text: string, from: number, to: number): Statement[] {
+export function parameterStatements(text: string, from: number, to: number, known?: readonly StatedNumber[]): Statement[] {
   const out: Statement[] = [];
-  const numbers = findNumbers(text, from, to);
+  const numbers = known ?? findNumbers(text, from, to);
   const numberAt = (pos: number) => numbers.find((n) => n.start >= pos && n.start <= pos + 2);
   for (let p = from; p < to; p++) {
     const c = text[p];

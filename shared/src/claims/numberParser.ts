@@ -108,10 +108,14 @@ export function precisionOf(mantissa: string): { significantDigits: number; reso
   return { significantDigits: Math.max(1, sig), resolution: trimmed === '0' ? 1 : 10 ** trailing };
 }
 
+/** Last characters of the relations, to rule most positions out at once. */
+const RELATION_LAST_CHARS = new Set(RELATIONS.map(([word]) => word[word.length - 1]));
+
 /** The relation written just before `pos` (skipping spaces), with where it starts. */
 function relationBefore(text: string, pos: number): { relation: string; qualifier: Qualifier; start: number } | null {
   let p = pos;
   while (p > 0 && (text[p - 1] === ' ' || text[p - 1] === '\n')) p--;
+  if (p === 0 || !RELATION_LAST_CHARS.has(text[p - 1])) return null;
   const before = text.slice(Math.max(0, p - 16), p);
   for (const [word, qualifier] of RELATIONS) {
     if (!before.endsWith(word)) continue;
@@ -124,9 +128,12 @@ function relationBefore(text: string, pos: number): { relation: string; qualifie
 }
 
 /** The unit written at `pos` (after spaces), if any. */
-export function unitAt(text: string, pos: number): StatedUnit | null {
+export function unitAt(text: string, pos: number, cache?: Map<string, Unit | null>): StatedUnit | null {
+  const okUnit = (spelled: string) => parseUnitCached(spelled, cache);
   let p = pos;
   while (p < text.length && (text[p] === ' ' || text[p] === '\n')) p++;
+  // Units start with a letter or one of a few symbols; anything else rules a unit out at once.
+  if (p >= text.length || !/[A-Za-z%″′°^'∘μ⊙]/.test(text[p])) return null;
   const rest = text.slice(p, p + 40);
   for (const [re, spelled] of UNIT_WORDS) {
     const m = re.exec(rest);
@@ -181,16 +188,21 @@ export function unitAt(text: string, pos: number): StatedUnit | null {
   return { text: written, start: p, end: lastEnd, unit: okUnit(only) };
 }
 
-function okUnit(spelled: string): Unit | null {
+/** parseUnit, remembered in `cache` (owned by the caller) when one is given. */
+function parseUnitCached(spelled: string, cache?: Map<string, Unit | null>): Unit | null {
+  const hit = cache?.get(spelled);
+  if (hit !== undefined) return hit;
   const r = parseUnit(spelled);
-  return r.ok ? r.unit : null;
+  const unit = r.ok ? r.unit : null;
+  cache?.set(spelled, unit);
+  return unit;
 }
 
 /**
  * Every number in text[from, to). Numbers inside citation markers (⟦…⟧) are skipped, as are
  * digits that are part of a word or identifier (H0, z_1, 2MASS, J1234+56).
  */
-export function findNumbers(text: string, from = 0, to = text.length): StatedNumber[] {
+export function findNumbers(text: string, from = 0, to = text.length, unitCache?: Map<string, Unit | null>): StatedNumber[] {
   const out: StatedNumber[] = [];
   let p = from;
   while (p < to) {
@@ -215,7 +227,7 @@ export function findNumbers(text: string, from = 0, to = text.length): StatedNum
       p = skipWord(text, p);
       continue;
     }
-    const parsed = parseNumberAt(text, p, to);
+    const parsed = parseNumberAt(text, p, to, unitCache);
     if (!parsed) {
       p = skipWord(text, p);
       continue;
@@ -232,7 +244,7 @@ function skipWord(text: string, p: number): number {
 }
 
 /** Parses a number expression starting at p (a digit or '.'); null when it is part of an identifier. */
-function parseNumberAt(text: string, p: number, to: number): StatedNumber | null {
+function parseNumberAt(text: string, p: number, to: number, unitCache?: Map<string, Unit | null>): StatedNumber | null {
   // A sign right before the number (not a range dash after a digit).
   let start = p;
   let sign = 1;
@@ -327,7 +339,7 @@ function parseNumberAt(text: string, p: number, to: number): StatedNumber | null
     }
   }
 
-  const unit = unitAt(text, end);
+  const unit = unitAt(text, end, unitCache);
   const qualifier: Qualifier = range ? 'range' : rel ? rel.qualifier : 'exact';
   return {
     value: range ? (range.low + range.high) / 2 : value,

@@ -29,9 +29,9 @@ const BETWEEN_FORM = /(?:between|from)\s+(?:redshifts?\s+|z\s*=\s*)(\d*\.?\d+)\s
 const EPOCH_SUBSCRIPT = /^_\{?(?:eq|\*|rec|dec|d|drag|acc|t|re|reion|ion|max|min|peak|form|f)\b/;
 
 /** Every redshift mention in text[from, to). */
-export function findRedshifts(text: string, from = 0, to = text.length): RedshiftMention[] {
+export function findRedshifts(text: string, from = 0, to = text.length, known?: readonly StatedNumber[]): RedshiftMention[] {
   const slice = text.slice(from, to);
-  const numbers = findNumbers(text, from, to);
+  const numbers = known ?? findNumbers(text, from, to);
   const numberAt = (pos: number) => numbers.find((n) => n.start >= pos && n.start <= pos + 1);
   const out: RedshiftMention[] = [];
   const taken = new Set<number>();

@@ -1,0 +1,42 @@
+/**
+ * Reader benchmark (`npm run bench`): throughput of the LaTeX and Markdown readers on a 1 MB
+ * synthetic manuscript, claim extraction on top, peak memory, and — side by side on the same
+ * machine — the general-purpose LaTeX PEG parser from npm (latex-utensils), on a smaller input
+ * because it is far slower. Figures are printed; nothing is asserted.
+ */
+
+import { latexParser } from 'latex-utensils';
+import { extractClaims, readLatex, readMarkdown } from '../../shared/src/index.js';
+import { syntheticLatexManuscript, syntheticMarkdownManuscript } from './syntheticManuscript.js';
+
+function timeRuns(label: string, bytes: number, runs: number, work: () => unknown): number {
+  for (let i = 0; i < Math.min(5, runs); i++) work(); // warm-up
+  const times: number[] = [];
+  for (let i = 0; i < runs; i++) {
+    const t0 = process.hrtime.bigint();
+    work();
+    times.push(Number(process.hrtime.bigint() - t0) / 1e6);
+  }
+  times.sort((a, b) => a - b);
+  const median = times[Math.floor(times.length / 2)];
+  const mbPerS = bytes / 1e6 / (median / 1000);
+  console.log(`  ${label.padEnd(52)} ${median.toFixed(1).padStart(8)} ms  ${mbPerS.toFixed(2).padStart(8)} MB/s  (median of ${runs})`);
+  return mbPerS;
+}
+
+const latex = syntheticLatexManuscript(1_000_000);
+const markdown = syntheticMarkdownManuscript(1_000_000);
+console.log('\nComove reader benchmark');
+console.log(`  LaTeX manuscript ${(latex.length / 1e6).toFixed(2)} MB, Markdown manuscript ${(markdown.length / 1e6).toFixed(2)} MB (synthetic, test/bench/syntheticManuscript.ts)\n`);
+
+const ours = timeRuns('LaTeX reader (readLatex)', latex.length, 30, () => readLatex(latex));
+timeRuns('LaTeX reader + claim extraction', latex.length, 10, () => extractClaims(readLatex(latex)));
+timeRuns('Markdown reader (remark + our walker)', markdown.length, 10, () => readMarkdown(markdown));
+timeRuns('Markdown reader + claim extraction', markdown.length, 5, () => extractClaims(readMarkdown(markdown)));
+
+// The general-purpose PEG parser, on 50 kB (it needs seconds per megabyte).
+const small = syntheticLatexManuscript(50_000);
+const peg = timeRuns('general-purpose LaTeX PEG parser (latex-utensils), 50 kB', small.length, 5, () => latexParser.parse(small));
+timeRuns('our LaTeX reader on the same 50 kB', small.length, 30, () => readLatex(small));
+console.log(`\n  LaTeX reader speed-up over the general-purpose parser: ${(ours / peg).toFixed(0)}×`);
+console.log(`  Peak resident memory of this process: ${(process.resourceUsage().maxRSS / 1024).toFixed(0)} MB`);
