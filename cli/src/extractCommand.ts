@@ -121,7 +121,7 @@ export function fileJson(f: FileExtraction, source: string): Record<string, unkn
       parameters: d.input,
       stated: d.stated,
       preset: d.preset,
-      range: fromReading(d.start, Math.max(d.start, d.end)),
+      range: d.sourceRange ? fromSource(d.sourceRange.start, d.sourceRange.end) : fromReading(d.start, Math.max(d.start, d.end)),
       scope: { start: fromReading(d.scopeStart, d.scopeStart).start, end: fromReading(d.scopeEnd, d.scopeEnd).end },
       incomplete: d.incomplete,
     })),
@@ -144,7 +144,7 @@ export function fileText(f: FileExtraction, source: string): string {
   const out: string[] = [`${f.uri}  (${f.format})`];
   out.push(`  declared parameter sets: ${f.declarations.length || 'none'}`);
   for (const d of f.declarations) {
-    out.push(`    ${pos(fromReading(d.start, d.end))}  ${d.origin}, ${d.role}: ${formatParameterInput(d.input) || '(nothing usable)'}${d.incomplete ? `  — incomplete: ${d.incomplete}` : ''}`);
+    out.push(`    ${pos(d.sourceRange ? fromSource(d.sourceRange.start, d.sourceRange.end) : fromReading(d.start, d.end))}  ${d.origin}, ${d.role}: ${formatParameterInput(d.input) || '(nothing usable)'}${d.incomplete ? `  — incomplete: ${d.incomplete}` : ''}`);
   }
   out.push(`  claims: ${f.claims.length}`);
   const rows = f.claims.map((c) => {

@@ -149,8 +149,10 @@ export function extractClaims(doc: DocumentReading): ClaimScan {
         const COMPONENT = /(baryon|cold dark matter|dark matter|dark energy|matter|radiation|neutrino)s?/i;
         const clauseBefore = near.slice(Math.max(near.lastIndexOf(','), near.lastIndexOf(';')) + 1);
         const clauseAfter = after.split(/[,;]/)[0];
+        // "5% baryons" names the component after the number; "baryons make up 5%" before it.
+        const right = new RegExp(`^\\s*(?:of\\s+(?:the\\s+)?)?${COMPONENT.source}`, 'i').exec(after.slice(1));
         const lastBefore = [...clauseBefore.matchAll(new RegExp(COMPONENT.source, 'gi'))].pop();
-        const component = lastBefore ?? COMPONENT.exec(clauseAfter);
+        const component = right ?? lastBefore ?? COMPONENT.exec(clauseAfter);
         if (component && /universe|budget|energy density|content|composition|made|consists|dark energy|dark matter/i.test(sentenceText)) {
           found.push({ kind: 'compositionPercentage', value: n, angleArcsec: null, parameter: component[1].toLowerCase(), sinceEpoch: null, start: n.start, end: n.unit.end, sentenceStart: sentence.start, sentenceEnd: sentence.end, cueDistance: 0 });
         }
@@ -199,9 +201,16 @@ export function extractClaims(doc: DocumentReading): ClaimScan {
           const volumeLike = cue.kind === 'comovingVolume' && dims.length === 3 && (dims.angle === 0 || dims.angle === -2);
           if (!volumeLike && !dimensionsMatch(cue.dimension, dims)) continue;
           const endBefore = lastMatchEnd(cue.pattern, before);
-          const distance = endBefore >= 0 ? before.length - endBefore : /^\s*(?:for the |as the |is the )?/.test(after) && cue.pattern.test(after.slice(0, 30)) ? 25 : -1;
+          const afterUnit = text.slice(n.unit!.end, Math.min(sentence.end, n.unit!.end + 40));
+          const distance = endBefore >= 0 ? before.length - endBefore : /^\s*(?:for|as|is) the /.test(afterUnit) && cue.pattern.test(afterUnit) ? 25 : -1;
           if (distance < 0) continue;
           if (!best || distance < best.distance) best = { kind: cue.kind, distance };
+        }
+        if (!best && dims.time === 1 && Object.keys(dims).every((k) => k === 'time' || dims[k] === 0)) {
+          // "…left it 11.59 Gyr ago", "…was 4.8 Gyr old": the word after the time names it.
+          const afterTime = text.slice(n.unit!.end, Math.min(sentence.end, n.unit!.end + 12));
+          if (/^\s*ago\b/i.test(afterTime)) best = { kind: 'lookbackTime', distance: 30 };
+          else if (/^\s*old\b/i.test(afterTime)) best = { kind: 'age', distance: 30 };
         }
         if (!best) {
           // Unlabelled times and distances are common in prose ("8.4 kpc", "13.8 Gyr") but unbound: leave them.
@@ -259,8 +268,10 @@ export function extractClaims(doc: DocumentReading): ClaimScan {
       if (!NEEDS_REDSHIFT.has(f.kind) || f.sinceEpoch) {
         zSource = f.sinceEpoch ? 'epoch' : null;
       } else if (respectively) {
-        const i = needing.indexOf(f);
-        z = flat[i].value;
+        const m = flat[needing.indexOf(f)];
+        if (m.range && f.kind === 'comovingVolume') zRange = m.range;
+        else if (m.range) unchecked = 'the claim refers to a range of redshift';
+        else z = m.value;
         zSource = 'respectively';
       } else {
         const distinct = [...new Set(flat.map((m) => (m.range ? `${m.range[0]}-${m.range[1]}` : String(m.value))))];
@@ -275,8 +286,13 @@ export function extractClaims(doc: DocumentReading): ClaimScan {
           const clauseStart = Math.max(sentence.start, text.lastIndexOf(';', f.start) + 1, text.lastIndexOf(', and', f.start) + 1);
           const inClause = flat.filter((m) => m.start >= clauseStart && m.start < f.start);
           const afterClaim = flat.filter((m) => m.start > f.start && !text.slice(f.end, m.start).includes(';'));
-          const pick = inClause.length ? inClause[inClause.length - 1] : afterClaim.length === 1 ? afterClaim[0] : null;
-          if (pick && !pick.range) {
+          // One redshift before the claim in its clause, or else exactly one after it; two or more
+          // in the clause with nothing to order them is ambiguous.
+          const pick = inClause.length === 1 ? inClause[0] : inClause.length === 0 && afterClaim.length === 1 ? afterClaim[0] : null;
+          if (pick && pick.range && f.kind === 'comovingVolume') {
+            zRange = pick.range;
+            zSource = 'sentence';
+          } else if (pick && !pick.range) {
             z = pick.value;
             zSource = 'sentence';
             confidence -= 0.15;

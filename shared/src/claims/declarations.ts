@@ -37,6 +37,8 @@ export interface Declaration {
   readonly scopeEnd: number;
   /** Why the declaration cannot be used as it stands, if so. */
   readonly incomplete: string | null;
+  /** Source range of a directive or front-matter entry (prose is located by start/end). */
+  readonly sourceRange: { readonly start: number; readonly end: number } | null;
 }
 
 export interface DeclarationProblem {
@@ -147,6 +149,7 @@ export function findDeclarations(doc: DocumentReading, unitCache?: Map<string, U
       scopeStart: local ? at : 0,
       scopeEnd: local ? sectionEnd(at) : text.length,
       incomplete: parsed.problems.length ? parsed.problems.map((p) => p.message).join('; ') : null,
+      sourceRange: { start: d.sourceStart, end: d.sourceEnd },
     });
   }
   if (skipOpen !== null) skips.push({ start: skipOpen, end: text.length });
@@ -203,6 +206,7 @@ export function findDeclarations(doc: DocumentReading, unitCache?: Map<string, U
       scopeStart: other ? sectionStart(s.start) : 0,
       scopeEnd: other ? sectionEnd(s.start) : text.length,
       incomplete,
+      sourceRange: null,
     });
   }
 

@@ -1,0 +1,87 @@
+/** Claim kinds and redshift binding, rule by rule. */
+import { describe, expect, it } from 'vitest';
+import { extractClaims, readLatex, readPlainText, type Claim } from '../../shared/src/index.js';
+
+function claimsOf(src: string, plain = false): Array<{ kind: string; text: string; z: number | null; zSource: string | null; unchecked: string | null; claim: Claim }> {
+  const doc = plain ? readPlainText(src) : readLatex(src);
+  return extractClaims(doc).claims.map((c) => ({ kind: c.kind, text: doc.reading.text.slice(c.start, c.end), z: c.z, zSource: c.zSource, unchecked: c.unchecked, claim: c }));
+}
+
+describe('claim kinds', () => {
+  it('tells distances apart by their names and symbols', () => {
+    const c = claimsOf('At $z=1$ the luminosity distance is $D_L = 6.6$\\,Gpc, the angular-diameter distance $D_A = 1.65$\\,Gpc and the comoving distance 3.3\\,Gpc.');
+    expect(c.map((x) => [x.kind, x.text])).toEqual([
+      ['luminosityDistance', '6.6 Gpc'],
+      ['angularDiameterDistance', '1.65 Gpc'],
+      ['comovingDistance', '3.3 Gpc'],
+    ]);
+  });
+  it('tells lookback time, age at z and age today apart', () => {
+    const c = claimsOf('At $z = 1$ the light left 7.7\\,Gyr ago, when the universe was 5.8\\,Gyr old; today it is 13.5\\,Gyr old.');
+    expect(c.map((x) => x.kind)).toEqual(['lookbackTime', 'age', 'ageToday']);
+  });
+  it('reads scales written as kpc/arcsec, and sizes stated for an angle', () => {
+    const c = claimsOf('At $z = 0.5$ the scale is 6.1\\,kpc/arcsec, so 1\\farcs0 corresponds to 6.1\\,kpc and the 3\\farcs2 separation is 19.5\\,kpc.');
+    expect(c.map((x) => [x.kind, x.claim.angleArcsec])).toEqual([['properScale', null], ['properScale', 1], ['properScale', 3.2]]);
+  });
+  it('reads epochs, the expansion factor and composition percentages', () => {
+    const c = claimsOf('Equality was at $z_{\\rm eq} = 3400$ and recombination at $z_* \\approx 1090$. The universe has expanded a thousandfold since recombination. Today the universe is made of 5\\% baryons, 27\\% dark matter and 68\\% dark energy.');
+    expect(c.map((x) => [x.kind, x.text, x.claim.parameter ?? x.claim.sinceEpoch])).toEqual([
+      ['matterRadiationEquality', '3400', null],
+      ['recombination', '1090', null],
+      ['expansionFactor', 'thousandfold', 'recombination'],
+      ['compositionPercentage', '5%', 'baryon'],
+      ['compositionPercentage', '27%', 'dark matter'],
+      ['compositionPercentage', '68%', 'dark energy'],
+    ]);
+  });
+  it('reads Hubble-law distances as their own kind, not as D_L', () => {
+    expect(claimsOf('At $z = 0.01$ the Hubble-flow distance $cz/H_0 = 42.8$\\,Mpc.')[0].kind).toBe('hubbleLawDistance');
+  });
+  it('leaves alone numbers that are not claims', () => {
+    const src = String.raw`In 2019 we observed 1250 stars (Figure~3, Section~4.2, Eq.~7) with a seeing of 0\farcs9, stellar masses of $10^{10}\,M_\odot$, the H$\alpha$ line at 656.3\,nm, $m_z = 25.3$\,mag in the $z$-band, 12 galaxies at $z > 2$, a parallax distance of 1.2\,kpc, apertures of 10\,kpc, $k = 0.1\,h$\,Mpc$^{-1}$, the strain $h_0 = 1.2\times10^{-25}$, a solid angle $\Omega = 2.1$\,deg$^2$ and a measured GW luminosity distance of $D_L = 440^{+180}_{-190}$\,Mpc from its posterior.`;
+    expect(claimsOf(src)).toEqual([]);
+  });
+});
+
+describe('binding to a redshift', () => {
+  it('binds to the redshift of the sentence, of the clause, or in order with “respectively”', () => {
+    expect(claimsOf('At $z = 2$ the age is 3.2\\,Gyr.')[0]).toMatchObject({ z: 2, zSource: 'sentence' });
+    const r = claimsOf('The luminosity distances at $z = 0.3$ and 0.5 are 1.55 and 2.83\\,Gpc, respectively.');
+    expect(r.map((x) => [x.text, x.z])).toEqual([['1.55', 0.3], ['2.83 Gpc', 0.5]]);
+  });
+  it('binds to the previous sentence, and to "this redshift"', () => {
+    const c = claimsOf('The pair lies at $z = 1.27$. At this redshift the luminosity distance is 8.9\\,Gpc.');
+    expect(c[0]).toMatchObject({ z: 1.27, zSource: 'previous-sentence' });
+  });
+  it('binds to a named object mentioned again later', () => {
+    const c = claimsOf('The group Ember-3 lies at $z = 0.5$.\n\nIn a later section: the light left Ember-3 5.0\\,Gyr ago.');
+    expect(c[0]).toMatchObject({ z: 0.5 });
+  });
+  it('binds table cells to the z column of their row and takes the unit from the header', () => {
+    const c = claimsOf('\\begin{tabular}{lcc} Name & $z$ & $D_L$ (Mpc) \\\\ A & 0.5 & 2832 \\\\ \\end{tabular}');
+    expect(c[0]).toMatchObject({ kind: 'luminosityDistance', text: '2832', z: 0.5, zSource: 'table-row' });
+    expect(c[0].claim.value.unit?.unit).not.toBeNull();
+  });
+  it('binds volumes to a range of redshift', () => {
+    const c = claimsOf('The comoving volume between $z = 2$ and $z = 3$ is 120\\,Gpc$^3$, and within $1 < z < 2$ it is 430\\,Gpc$^3$.');
+    expect(c[0].claim.zRange).toEqual([2, 3]);
+  });
+  it('leaves a claim unchecked, with the reason, when the binding is ambiguous or missing', () => {
+    const ambiguous = claimsOf('Galaxies at $z = 1$ and quasars at $z = 2$ show distances near 8\\,Gpc for the luminosity distance.');
+    expect(ambiguous[0].unchecked).toMatch(/names 2 redshifts/);
+    const missing = claimsOf('The luminosity distance is 6.6\\,Gpc.');
+    expect(missing[0].unchecked).toMatch(/no redshift/);
+  });
+  it('binds claims in the sentence of an epoch to the epoch’s redshift', () => {
+    const c = claimsOf('Recombination happened at $z_* \\approx 1090$, when the universe was 372{,}000 years old and the CMB was at 2970\\,K.');
+    expect(c.filter((x) => x.kind !== 'recombination').map((x) => [x.kind, x.z, x.zSource])).toEqual([['age', 1090, 'epoch'], ['cmbTemperature', 1090, 'epoch']]);
+  });
+  it('reads lookback statements spread over lines without the word lookback', () => {
+    const c = claimsOf('From $z \\approx 2$ to the present,\nthe stars formed over\nthe last 10.2\\,Gyr.');
+    expect(c[0]).toMatchObject({ kind: 'lookbackTime', z: 2 });
+  });
+  it('skips what the author silenced', () => {
+    expect(claimsOf('% comove: skip-next-line\nAt $z = 1$ the age is 5.8\\,Gyr.')).toEqual([]);
+  });
+});
