@@ -35,6 +35,10 @@ describe('claim kinds', () => {
       ['compositionPercentage', '68%', 'dark energy'],
     ]);
   });
+  it('reads the Hubble time and distance, h-scaled as in display equations', () => {
+    const c = claimsOf('The Hubble time is \\[ 1/H_0 = 9.78\\times10^9\\,h^{-1}\\,{\\rm yr} \\] and the Hubble distance $c/H_0 = 2998\\,h^{-1}$\\,Mpc.');
+    expect(c.map((x) => [x.kind, x.text, x.z])).toEqual([['hubbleTime', '9.78×10^9 h^-1 yr', null], ['hubbleDistance', '2998 h^-1 Mpc', null]]);
+  });
   it('reads Hubble-law distances as their own kind, not as D_L', () => {
     expect(claimsOf('At $z = 0.01$ the Hubble-flow distance $cz/H_0 = 42.8$\\,Mpc.')[0].kind).toBe('hubbleLawDistance');
   });

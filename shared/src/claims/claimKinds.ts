@@ -20,6 +20,8 @@ export type ClaimKind =
   | 'properScale'
   | 'comovingScale'
   | 'hubbleParameter'
+  | 'hubbleTime'
+  | 'hubbleDistance'
   | 'comovingVolume'
   | 'cmbTemperature'
   | 'expansionFactor'
@@ -53,6 +55,8 @@ const LENGTH = { length: 1 };
 const TIME = { time: 1 };
 
 export const KIND_CUES: readonly KindCue[] = [
+  { kind: 'hubbleTime', pattern: /Hubble time|\b1\s*\/\s*H_?0|H_?0\s*\^\s*-1|\bt_?H\b/i, dimension: TIME },
+  { kind: 'hubbleDistance', pattern: /Hubble (?:distance|radius|length)|\bc\s*\/\s*H_?0(?!\s*=\s*[\d.]+\s*(?:Mpc|Gpc)?\s*(?:at|for) z)|\bD_?H\b/i, dimension: LENGTH },
   { kind: 'hubbleLawDistance', pattern: /Hubble[- ](?:flow|law) distance|cz\s*\/\s*H_?0|recession velocity/i, dimension: LENGTH },
   { kind: 'luminosityDistance', pattern: /luminosity distance|\bD_?L\b|\bd_?L\b|\bD_\{?L\}?|\bD_\{?lum/i, dimension: LENGTH },
   { kind: 'angularDiameterDistance', pattern: /angular[- ]diameter distance|\bD_?A\b|\bd_?A\b/i, dimension: LENGTH },
