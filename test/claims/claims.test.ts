@@ -67,6 +67,10 @@ describe('binding to a redshift', () => {
     expect(c[0]).toMatchObject({ kind: 'luminosityDistance', text: '2832', z: 0.5, zSource: 'table-row' });
     expect(c[0].claim.value.unit?.unit).not.toBeNull();
   });
+  it('binds table cells to the redshift in the table’s caption when the table has no z column', () => {
+    const c = claimsOf('\\begin{table}\\caption{Distances of the pair at $z = 1.27$.}\\begin{tabular}{lc} Model & $D_A$ (Gpc) \\\\ round & 1.72 \\\\ \\end{tabular}\\end{table}');
+    expect(c[0]).toMatchObject({ kind: 'angularDiameterDistance', text: '1.72', z: 1.27, zSource: 'caption' });
+  });
   it('binds volumes to a range of redshift', () => {
     const c = claimsOf('The comoving volume between $z = 2$ and $z = 3$ is 120\\,Gpc$^3$, and within $1 < z < 2$ it is 430\\,Gpc$^3$.');
     expect(c[0].claim.zRange).toEqual([2, 3]);

@@ -381,6 +381,19 @@ function tableClaims(doc: DocumentReading, inSkip: (pos: number) => boolean, uni
     if (row) row.push(c);
     else byRow.set(key, [c]);
   }
+  // A table's caption may give the redshift of all its rows ("Distances at z = 0.5"): the
+  // caption read just before the table's first cell, with nothing in between.
+  const captionRedshift = new Map<number, number | null>();
+  let lastCaption: (typeof doc.blocks)[number] | null = null;
+  for (const b of doc.blocks) {
+    if (b.kind === 'caption') lastCaption = b;
+    else if (b.kind === 'table-cell') {
+      const id = b.cell!.table;
+      if (captionRedshift.has(id)) continue;
+      const mentions = lastCaption ? findRedshifts(text, lastCaption.start, lastCaption.end) : [];
+      captionRedshift.set(id, mentions.length === 1 && !mentions[0].range && mentions[0].list.length === 0 ? mentions[0].value : null);
+    } else lastCaption = null;
+  }
   for (const c of cells) {
     const header = c.cell!.header;
     if (!header || inSkip(c.start)) continue;
@@ -395,13 +408,14 @@ function tableClaims(doc: DocumentReading, inSkip: (pos: number) => boolean, uni
     const row = byRow.get(`${c.cell!.table}:${c.cell!.row}`) ?? [];
     const zCell = row.find((r) => r !== c && /^(?:z|z_\w+|redshift)\b/i.test((r.cell!.header ?? '').trim()));
     const zNumbers = zCell ? findNumbers(text, zCell.start, zCell.end, units) : [];
-    const z = zNumbers.length === 1 ? zNumbers[0].value : null;
+    const fromCaption = zCell ? null : captionRedshift.get(c.cell!.table) ?? null;
+    const z = zNumbers.length === 1 ? zNumbers[0].value : fromCaption;
     out.push({
       kind: headerKind,
       value,
       z,
       zRange: null,
-      zSource: z === null ? null : 'table-row',
+      zSource: z === null ? null : fromCaption !== null ? 'caption' : 'table-row',
       angleArcsec: null,
       parameter: null,
       sinceEpoch: null,
