@@ -149,11 +149,6 @@ class LatexScanner {
     this.frame.pos = p;
   }
 
-  /** Source offset (in the original) for a position of the current frame. */
-  private at(p: number): number {
-    return this.frame.span ? (p >= this.frame.src.length ? this.frame.span.end : this.frame.span.start) : p;
-  }
-
   private spanOf(start: number, end: number): [number, number] {
     return this.frame.span ? [this.frame.span.start, this.frame.span.end] : [start, end];
   }
@@ -428,7 +423,7 @@ class LatexScanner {
           break;
         case 38: // &
           this.pos = p + 1;
-          if (this.table && this.mathDepth === 0) this.nextCell(p);
+          if (this.table && this.mathDepth === 0) this.nextCell();
           else this.emitSpace(p, p + 1);
           break;
         case 126: // ~
@@ -486,10 +481,9 @@ class LatexScanner {
     return false;
   }
 
-  private withMath(display: boolean, start: number, term: Terminator): void {
+  private withMath(display: boolean, term: Terminator): void {
     const draft = this.current;
     const outStart = draft.out.length;
-    void start;
     this.mathDepth++;
     this.loop(term);
     this.mathDepth--;
@@ -500,7 +494,7 @@ class LatexScanner {
     const s = this.src;
     if (s[p + 1] === '$') {
       this.pos = p + 2;
-      this.withMath(true, p, { kind: 'dollar', double: true, start: p });
+      this.withMath(true, { kind: 'dollar', double: true, start: p });
     } else {
       this.pos = p + 1;
       if (this.mathDepth > 0) {
@@ -508,7 +502,7 @@ class LatexScanner {
         this.problem('unexpected $ inside math', p, p + 1, 'warning');
         return;
       }
-      this.withMath(false, p, { kind: 'dollar', double: false, start: p });
+      this.withMath(false, { kind: 'dollar', double: false, start: p });
     }
   }
 
@@ -543,7 +537,7 @@ class LatexScanner {
     if (SWITCHED_MACROS.has(name)) {
       switch (name) {
         case 'begin':
-          return this.beginEnvironment(p, term);
+          return this.beginEnvironment(p);
         case 'end': {
           const env = (this.readRawGroup() ?? '').trim();
           if (term.kind === 'env' && term.name === env) return true;
@@ -589,7 +583,7 @@ class LatexScanner {
           return false;
         case '\\': {
           this.readRawOptional();
-          if (this.table && this.mathDepth === 0) this.nextRow(p);
+          if (this.table && this.mathDepth === 0) this.nextRow();
           else this.emitSpace(p, this.pos);
           return false;
         }
@@ -601,10 +595,10 @@ class LatexScanner {
           this.endParagraph();
           return false;
         case '(':
-          this.withMath(false, p, { kind: 'paren', start: p });
+          this.withMath(false, { kind: 'paren', start: p });
           return false;
         case '[':
-          this.withMath(true, p, { kind: 'display', start: p });
+          this.withMath(true, { kind: 'display', start: p });
           return false;
         case 'verb': {
           const s = this.src;
@@ -889,7 +883,7 @@ class LatexScanner {
 
   // ---- environments -----------------------------------------------------------------------
 
-  private beginEnvironment(p: number, outer: Terminator): boolean {
+  private beginEnvironment(p: number): boolean {
     const env = (this.readRawGroup() ?? '').trim();
     if (env === 'document') {
       this.silent = false;
@@ -910,11 +904,11 @@ class LatexScanner {
         this.loop({ kind: 'env', name: env });
         return false;
       }
-      this.withMath(true, p, { kind: 'env', name: env });
+      this.withMath(true, { kind: 'env', name: env });
       return false;
     }
     if (TABLE_ENVIRONMENTS.has(env)) {
-      this.tableEnvironment(env, p);
+      this.tableEnvironment(env);
       return false;
     }
     // Other environments are read through; a block environment breaks the paragraph.
@@ -922,14 +916,12 @@ class LatexScanner {
     if (!inline) this.endParagraph();
     if (env === 'minipage' || env === 'figure' || env === 'figure*' || env === 'table' || env === 'table*' || env === 'wrapfigure') this.readRawOptional();
     if (env === 'minipage' || env === 'wrapfigure') this.readRawGroup();
-    const found = this.loop({ kind: 'env', name: env });
+    this.loop({ kind: 'env', name: env });
     if (!inline) this.endParagraph();
-    void outer;
-    void found;
     return false;
   }
 
-  private tableEnvironment(env: string, p: number): void {
+  private tableEnvironment(env: string): void {
     if (this.mathDepth > 0 && env === 'array') {
       this.readRawGroup();
       this.loop({ kind: 'env', name: env });
@@ -954,7 +946,6 @@ class LatexScanner {
     this.table = outer;
     this.current = outer ? this.newCellDraft() : savedCurrent;
     if (!outer) this.current = this.newDraft('paragraph');
-    void p;
   }
 
   private newCellDraft(): Draft {
@@ -974,13 +965,13 @@ class LatexScanner {
     }
   }
 
-  private nextCell(_p: number): void {
+  private nextCell(): void {
     this.finishCell();
     this.table!.column++;
     this.current = this.newCellDraft();
   }
 
-  private nextRow(_p: number): void {
+  private nextRow(): void {
     this.finishCell();
     const t = this.table!;
     if (t.column > 0 || t.firstRow.length > 0 || t.row > 0) t.row++;
@@ -1040,20 +1031,30 @@ class LatexScanner {
   private assemble(): DocumentReading {
     const drafts = this.finished.filter((d) => d.out.length > 0);
     const { reading, starts } = this.store.assemble(drafts.map((d) => d.out), '\n\n');
+    const text = reading.text;
     const blocks: Block[] = [];
     const math: MathSpan[] = [];
     const offsets = new Map<Draft, number>();
+    const blank = (c: number) => c === 32 || c === 10;
     drafts.forEach((d, i) => {
       const start = starts[i];
       offsets.set(d, start);
-      const end = start + d.out.length;
-      blocks.push(d.cell ? { kind: d.kind, start, end, cell: d.cell } : { kind: d.kind, start, end });
-      for (const m of d.math) if (m.end > m.start) math.push({ start: start + m.start, end: start + m.end, display: m.display });
+      // The block is its non-blank part.
+      let a = start;
+      let e = start + d.out.length;
+      while (a < e && blank(text.charCodeAt(a))) a++;
+      while (e > a && blank(text.charCodeAt(e - 1))) e--;
+      if (e > a) blocks.push(d.cell ? { kind: d.kind, start: a, end: e, cell: d.cell } : { kind: d.kind, start: a, end: e });
+      for (const m of d.math) {
+        let ms = start + m.start;
+        let me = start + m.end;
+        while (ms < me && blank(text.charCodeAt(ms))) ms++;
+        while (me > ms && blank(text.charCodeAt(me - 1))) me--;
+        if (me > ms) math.push({ start: ms, end: me, display: m.display });
+      }
     });
     /** Start in the reading text of the first non-empty draft at or after each finished index. */
     const startFrom: number[] = new Array(this.finished.length + 1);
-    trimBlocks(reading.text, blocks);
-    trimBlocks(reading.text, math);
     startFrom[this.finished.length] = reading.text.length;
     for (let i = this.finished.length - 1; i >= 0; i--) startFrom[i] = offsets.get(this.finished[i]) ?? startFrom[i + 1];
     const where = ({ draft, offset, finishedBefore }: Anchor) => {
@@ -1097,18 +1098,6 @@ function splitTopLevel(text: string, sep: string): string[] {
   return out;
 }
 
-/** Narrows each range to its non-blank part, dropping ranges that are all blank. */
-function trimBlocks<T extends { start: number; end: number }>(text: string, blocks: T[]): void {
-  let w = 0;
-  for (const b of blocks) {
-    let a = b.start;
-    let e = b.end;
-    while (a < e && (text[a] === ' ' || text[a] === '\n')) a++;
-    while (e > a && (text[e - 1] === ' ' || text[e - 1] === '\n')) e--;
-    if (e > a) blocks[w++] = { ...b, start: a, end: e };
-  }
-  blocks.length = w;
-}
 
 /** siunitx number text: `1.2e3` → `1.2×10^3`, `+-` → `±`, spaces dropped. */
 export function siNumber(text: string): string {

@@ -25,13 +25,16 @@ export interface Draft {
   firstRecord: number;
 }
 
-// Record fields (stride 5): draft id, offset in the draft, source start, source end, string index (−1: verbatim).
+// Record fields (stride 5): draft id, offset in the draft, source start, source end, string index
+// (VERBATIM: a copy of the source; SPACE: one space; otherwise an index into the strings).
 const R_DRAFT = 0;
 const R_OUT = 1;
 const R_START = 2;
 const R_END = 3;
 const R_STR = 4;
 const R_STRIDE = 5;
+const VERBATIM = -1;
+const SPACE = -2;
 
 // Map fields of ReadingText (stride 4): reading offset, source start, source end, exact (1) or not (0).
 const M_OUT = 0;
@@ -94,12 +97,12 @@ export class OutputStore {
     const k = (this.count - 1) * R_STRIDE;
     const r = this.records;
     // A copy that continues the draft's previous verbatim piece extends it.
-    if (k >= 0 && r[k + R_DRAFT] === d.id && r[k + R_STR] === -1 && r[k + R_END] === start) {
+    if (k >= 0 && r[k + R_DRAFT] === d.id && r[k + R_STR] === VERBATIM && r[k + R_END] === start) {
       r[k + R_END] = end;
       d.length += end - start;
       return;
     }
-    this.push(d, start, end, -1, end - start);
+    this.push(d, start, end, VERBATIM, end - start);
   }
 
   /** Appends `text` standing for source[start, end). */
@@ -108,6 +111,10 @@ export class OutputStore {
     if (!text) return;
     if (d.blank && text !== ' ' && /\S/.test(text)) d.blank = false;
     d.last = text.charCodeAt(text.length - 1);
+    if (text === ' ') {
+      this.push(d, start, end, SPACE, 1);
+      return;
+    }
     this.strings.push(text);
     this.push(d, start, end, this.strings.length - 1, text.length);
   }
@@ -118,6 +125,12 @@ export class OutputStore {
     this.replace(d, ' ', start, end);
   }
 
+  /** The text of the record at field offset k. */
+  private pieceText(k: number): string {
+    const str = this.records[k + R_STR];
+    return str === VERBATIM ? this.source.slice(this.records[k + R_START], this.records[k + R_END]) : str === SPACE ? ' ' : this.strings[str];
+  }
+
   /** The text of one draft. */
   textOf(d: Draft): string {
     if (d.firstRecord < 0) return '';
@@ -126,7 +139,7 @@ export class OutputStore {
     for (let i = d.firstRecord; i < this.count; i++) {
       const k = i * R_STRIDE;
       if (r[k + R_DRAFT] !== d.id) continue;
-      parts.push(r[k + R_STR] < 0 ? this.source.slice(r[k + R_START], r[k + R_END]) : this.strings[r[k + R_STR]]);
+      parts.push(this.pieceText(k));
     }
     return parts.join('');
   }
@@ -171,13 +184,11 @@ export class OutputStore {
       const draftPieces: string[] = [];
       for (let q = perDraft[j]; q < perDraft[j + 1]; q++) {
         const k = sorted[q] * R_STRIDE;
-        const str = r[k + R_STR];
-        const text = str < 0 ? this.source.slice(r[k + R_START], r[k + R_END]) : this.strings[str];
-        draftPieces.push(text);
+        draftPieces.push(this.pieceText(k));
         map[m++] = offset + r[k + R_OUT];
         map[m++] = r[k + R_START];
         map[m++] = r[k + R_END];
-        map[m++] = str < 0 ? 1 : 0;
+        map[m++] = r[k + R_STR] === VERBATIM ? 1 : 0;
       }
       pieces.push(draftPieces.join(''));
       offset += drafts[j].length;
