@@ -2,22 +2,10 @@
 import { describe, expect, it } from 'vitest';
 import { execFileSync, spawnSync } from 'node:child_process';
 import { existsSync } from 'node:fs';
-import { runCli } from '../../cli/src/run.js';
+import { runWithFiles } from '../helpers/cli.js';
 import { relativeError } from '../helpers/cosmology.js';
 
-function run(argv: string[], files: Record<string, string> = {}) {
-  let stdout = '';
-  let stderr = '';
-  const code = runCli(argv, {
-    stdout: (t) => (stdout += typeof t === 'string' ? t : new TextDecoder().decode(t)),
-    stderr: (t) => (stderr += t),
-    readFile: (p) => {
-      if (p in files) return files[p];
-      throw new Error('no such file');
-    },
-  });
-  return { code, stdout, stderr };
-}
+const run = runWithFiles;
 
 describe('comove calc', () => {
   it('prints JSON with the resolved parameters, units and one row per redshift', () => {

@@ -1,20 +1,8 @@
 /** `comove extract`: text and JSON output, multi-file projects, bad input. */
 import { describe, expect, it } from 'vitest';
-import { runCli } from '../../cli/src/run.js';
+import { runWithFiles } from '../helpers/cli.js';
 
-function run(argv: string[], files: Record<string, string>) {
-  let stdout = '';
-  let stderr = '';
-  const code = runCli(argv, {
-    stdout: (t) => (stdout += typeof t === 'string' ? t : new TextDecoder().decode(t)),
-    stderr: (t) => (stderr += t),
-    readFile: (p) => {
-      if (p in files) return files[p];
-      throw new Error('no such file');
-    },
-  });
-  return { code, stdout, stderr };
-}
+const run = runWithFiles;
 
 const ROOT = '% comove: H0=70 Omega_m=0.3 flat\n\\begin{document}\nAt $z = 1$ the luminosity distance is $D_L = 6.6$\\,Gpc.\n\\input{sec/two}\n\\input{missing}\n\\end{document}\n';
 const CHILD = 'At $z = 2$ the universe was 3.2\\,Gyr old.\n';

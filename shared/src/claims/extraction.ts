@@ -5,11 +5,10 @@
  * the caller passes in.
  */
 
-import type { DocumentFormat, DocumentReading, ReaderProblem } from '../reader/documentReading.js';
+import { unreadDocument, type DocumentFormat, type DocumentReading, type ReaderProblem } from '../reader/documentReading.js';
 import { readLatex, type MacroDefinition } from '../reader/latexScanner.js';
 import { readMarkdown } from '../reader/markdownReader.js';
 import { readPlainText } from '../reader/plainTextReader.js';
-import { ReadingText } from '../reader/sourceMap.js';
 import { extractClaims, type Claim } from './claimExtractor.js';
 import type { Declaration, DeclarationProblem, SkipRegion } from './declarations.js';
 
@@ -50,17 +49,13 @@ export function formatOf(uri: string, text = ''): DocumentFormat {
   return 'latex';
 }
 
-function emptyReading(format: DocumentFormat, problem: ReaderProblem): DocumentReading {
-  return { format, reading: ReadingText.empty(), blocks: [], math: [], sentences: [], directives: [], includes: [], texRoot: null, frontMatter: null, problems: [problem] };
-}
-
 /** Reads one file in the format its name says; binary and oversized files become a problem, not a crash. */
 export function readFile(file: SourceFile, format: DocumentFormat = formatOf(file.uri, file.text), macros: readonly MacroDefinition[] = []): DocumentReading & { macros?: readonly MacroDefinition[] } {
   if (file.text.length > MAX_FILE_CHARS) {
-    return emptyReading(format, { message: `the file is too large to read (${(file.text.length / 1e6).toFixed(0)} MB; the limit is ${MAX_FILE_CHARS / 1024 / 1024} MB)`, sourceStart: 0, sourceEnd: 0, severity: 'error' });
+    return unreadDocument(format, `the file is too large to read (${(file.text.length / 1e6).toFixed(0)} MB; the limit is ${MAX_FILE_CHARS / 1024 / 1024} MB)`);
   }
   if (file.text.slice(0, 8192).includes('\u0000')) {
-    return emptyReading(format, { message: 'this is a binary file, not a manuscript', sourceStart: 0, sourceEnd: 0, severity: 'error' });
+    return unreadDocument(format, 'this is a binary file, not a manuscript');
   }
   if (format === 'latex') return readLatex(file.text, { macros });
   if (format === 'markdown') return readMarkdown(file.text);

@@ -6,7 +6,7 @@
  * offsets.
  */
 
-import type { ReadingText } from './sourceMap.js';
+import { ReadingText } from './sourceMap.js';
 
 export type DocumentFormat = 'latex' | 'markdown' | 'plaintext';
 
@@ -86,3 +86,19 @@ export interface DocumentReading {
 export const CITATION_OPEN = '⟦cite:';
 /** Marker for a value injected at build time (`\variable{…}`): ⟦value⟧. */
 export const INJECTED_VALUE = '⟦value⟧';
+
+/** A reading with nothing read and one problem saying why (a binary file, a reader failure). */
+export function unreadDocument(format: DocumentFormat, message: string): DocumentReading {
+  return {
+    format,
+    reading: ReadingText.empty(),
+    blocks: [],
+    math: [],
+    sentences: [],
+    directives: [],
+    includes: [],
+    texRoot: null,
+    frontMatter: null,
+    problems: [{ message, sourceStart: 0, sourceEnd: 0, severity: 'error' }],
+  };
+}

@@ -21,6 +21,7 @@ import {
   type MathSpan,
   type ReaderProblem,
   type TableCellPosition,
+  unreadDocument,
 } from './documentReading.js';
 import {
   CITATION_MACROS,
@@ -36,7 +37,7 @@ import {
   TRANSPARENT_ONE_ARG,
 } from './latexSymbols.js';
 import { splitSentences } from './sentences.js';
-import { OutputStore, ReadingText, type Draft as Output } from './sourceMap.js';
+import { OutputStore, type Draft as Output } from './sourceMap.js';
 
 /** A user macro: `\newcommand{\name}[params][default]{body}` or `\def\name#1#2{body}`. */
 export interface MacroDefinition {
@@ -1172,20 +1173,8 @@ export function readLatex(source: string, options: LatexReadOptions = {}): Docum
   try {
     reading = scanner.run();
   } catch (e) {
-    // A reader bug must not take the editor down: report it and return what we have.
-    return {
-      format: 'latex',
-      reading: ReadingText.empty(),
-      blocks: [],
-      math: [],
-      sentences: [],
-      directives: [],
-      includes: [],
-      texRoot: null,
-      frontMatter: null,
-      problems: [{ message: `internal reader error: ${(e as Error).message}`, sourceStart: 0, sourceEnd: 0, severity: 'error' }],
-      macros: [],
-    };
+    // A reader bug must not take the editor down: report it.
+    return { ...unreadDocument('latex', `internal reader error: ${(e as Error).message}`), macros: [] };
   }
   return { ...reading, macros: [...scanner.macros.values()] };
 }

@@ -14,10 +14,10 @@ import remarkMath from 'remark-math';
 import remarkParse from 'remark-parse';
 import { unified } from 'unified';
 import { parse as parseYaml } from 'yaml';
-import type { Block, BlockKind, Directive, DocumentReading, MathSpan, ReaderProblem, TableCellPosition } from './documentReading.js';
+import { unreadDocument, type Block, type BlockKind, type Directive, type DocumentReading, type MathSpan, type ReaderProblem, type TableCellPosition } from './documentReading.js';
 import { readLatex } from './latexScanner.js';
 import { splitSentences } from './sentences.js';
-import { OutputStore, ReadingText, type Draft } from './sourceMap.js';
+import { OutputStore, type Draft } from './sourceMap.js';
 
 const parser = unified().use(remarkParse).use(remarkGfm).use(remarkMath).use(remarkFrontmatter, ['yaml']);
 
@@ -234,17 +234,6 @@ export function readMarkdown(source: string): DocumentReading {
     walker.walkBlocks(tree.children);
     return walker.assemble();
   } catch (e) {
-    return {
-      format: 'markdown',
-      reading: ReadingText.empty(),
-      blocks: [],
-      math: [],
-      sentences: [],
-      directives: [],
-      includes: [],
-      texRoot: null,
-      frontMatter: null,
-      problems: [{ message: `internal reader error: ${(e as Error).message}`, sourceStart: 0, sourceEnd: 0, severity: 'error' }],
-    };
+    return unreadDocument('markdown', `internal reader error: ${(e as Error).message}`);
   }
 }
