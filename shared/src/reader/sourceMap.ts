@@ -43,6 +43,17 @@ const M_END = 2;
 const M_EXACT = 3;
 const M_STRIDE = 4;
 
+const UTF16 = new TextDecoder('utf-16le');
+const LITTLE_ENDIAN = new Uint8Array(new Uint16Array([1]).buffer)[0] === 1;
+
+/** A string from UTF-16 code units (TextDecoder where the platform is little-endian, as nearly all are). */
+function decodeUnits(units: Uint16Array): string {
+  if (LITTLE_ENDIAN) return UTF16.decode(units);
+  let out = '';
+  for (let i = 0; i < units.length; i += 8192) out += String.fromCharCode(...units.subarray(i, i + 8192));
+  return out;
+}
+
 function isBlankCode(c: number): boolean {
   return c === 32 || c === 10 || c === 9 || c === 13;
 }
@@ -166,34 +177,48 @@ export class OutputStore {
       if (o >= 0) sorted[fill[o]++] = i;
     }
     const starts: number[] = new Array(drafts.length);
-    const pieces: string[] = [];
+    let total = 0;
+    for (const d of drafts) total += d.length;
+    total += Math.max(0, drafts.length - 1) * separator.length;
+    // The text is written as UTF-16 code units into one buffer and decoded once: no string per piece.
+    const units = new Uint16Array(total);
+    const source = this.source;
     const map = new Int32Array((sorted.length + drafts.length) * M_STRIDE);
     let m = 0;
     let offset = 0;
+    const write = (str: string) => {
+      for (let i = 0; i < str.length; i++) units[offset + i] = str.charCodeAt(i);
+      offset += str.length;
+    };
     for (let j = 0; j < drafts.length; j++) {
       if (j > 0) {
-        pieces.push(separator);
         const prevEnd = m ? map[m - M_STRIDE + M_END] : 0;
         map[m++] = offset;
         map[m++] = prevEnd;
         map[m++] = prevEnd;
         map[m++] = 0;
-        offset += separator.length;
+        write(separator);
       }
       starts[j] = offset;
-      const draftPieces: string[] = [];
+      const draftStart = offset;
       for (let q = perDraft[j]; q < perDraft[j + 1]; q++) {
         const k = sorted[q] * R_STRIDE;
-        draftPieces.push(this.pieceText(k));
-        map[m++] = offset + r[k + R_OUT];
+        const str = r[k + R_STR];
+        map[m++] = draftStart + r[k + R_OUT];
         map[m++] = r[k + R_START];
         map[m++] = r[k + R_END];
-        map[m++] = r[k + R_STR] === VERBATIM ? 1 : 0;
+        map[m++] = str === VERBATIM ? 1 : 0;
+        offset = draftStart + r[k + R_OUT];
+        if (str === VERBATIM) {
+          const end = r[k + R_END];
+          for (let i = r[k + R_START]; i < end; i++) units[offset++] = source.charCodeAt(i);
+        } else if (str === SPACE) units[offset++] = 32;
+        else write(this.strings[str]);
       }
-      pieces.push(draftPieces.join(''));
-      offset += drafts[j].length;
+      offset = draftStart + drafts[j].length;
     }
-    return { reading: new ReadingText(pieces.join(''), map.subarray(0, m)), starts };
+    const text = decodeUnits(units);
+    return { reading: new ReadingText(text, map.subarray(0, m)), starts };
   }
 }
 
