@@ -68,6 +68,8 @@ interface Draft {
   readonly out: Output;
   readonly math: MathSpan[];
   cell?: TableCellPosition;
+  /** Where the draft starts in the reading text, once assembled (−1 before, or if empty). */
+  readingStart: number;
 }
 
 /** A position in the output while it is being built: a draft, an offset in it, and how many drafts were finished before. */
@@ -99,6 +101,27 @@ interface Frame {
 
 /** Macros with their own case in LatexScanner.macro (checked by one set lookup before the switch). */
 const SWITCHED_MACROS = new Set(['begin', 'end', 'newcommand', 'renewcommand', 'providecommand', 'newcommand*', 'renewcommand*', 'providecommand*', 'DeclareRobustCommand', 'def', 'gdef', 'edef', 'xdef', 'DeclareMathOperator', 'DeclareMathOperator*', 'ifmmode', 'else', 'fi', '\\', 'par', 'item', '(', '[', 'verb', 'footnote', 'footnotetext', 'thanks', 'tablecomments', 'tablenotetext', 'caption', 'tablecaption', 'figcaption', 'tablehead', 'multicolumn', 'multirow', 'cutinhead', 'sidehead', 'startdata', 'enddata', 'input', 'include', 'subfile', 'subfileinclude', 'import', 'subimport', 'InputIfFileExists', 'variable', 'input@value', 'href', 'frac', 'dfrac', 'tfrac', 'sqrt', 'farcs', 'farcm', 'fdg', 'fs', 'fm', 'fh', 'fd', 'SI', 'qty', 'si', 'unit', 'num', 'SIrange', 'qtyrange', 'numrange', 'ang']);
+
+const SWITCHED = 1;
+const CITATION = 2;
+const SECTION = 3;
+const SYMBOL = 4;
+const TRANSPARENT = 5;
+const FONT = 6;
+const DROPPED = 7;
+/** Which table knows each macro name (the first one wins, in the order macro() consults them). */
+const MACRO_CLASS = new Map<string, number>();
+for (const [names, cls] of [
+  [Object.keys(DROPPED_WITH_ARGS), DROPPED],
+  [[...FONT_SWITCHES], FONT],
+  [[...TRANSPARENT_ONE_ARG], TRANSPARENT],
+  [Object.keys(SYMBOL_MACROS), SYMBOL],
+  [[...SECTION_MACROS], SECTION],
+  [[...CITATION_MACROS], CITATION],
+  [[...SWITCHED_MACROS], SWITCHED],
+] as Array<[string[], number]>) {
+  for (const name of names) MACRO_CLASS.set(name, cls);
+}
 
 const BRACE: Terminator = { kind: 'brace' };
 const EOF: Terminator = { kind: 'eof' };
@@ -133,7 +156,7 @@ class LatexScanner {
   }
 
   private newDraft(kind: BlockKind): Draft {
-    return { kind, out: this.store.draft(), math: [] };
+    return { kind, out: this.store.draft(), math: [], readingStart: -1 };
   }
 
   // ---- source access -------------------------------------------------------------------
@@ -535,7 +558,9 @@ class LatexScanner {
     const afterName = this.pos;
     const spaced = isWord ? this.skipSpaces() : false;
 
-    if (SWITCHED_MACROS.has(name)) {
+    // One lookup tells which table (if any) knows the name.
+    const known = MACRO_CLASS.get(name) ?? 0;
+    if (known === SWITCHED) {
       switch (name) {
         case 'begin':
           return this.beginEnvironment(p);
@@ -724,7 +749,7 @@ class LatexScanner {
       }
     }
 
-    if (CITATION_MACROS.has(name)) {
+    if (known === CITATION) {
       this.readRawOptional();
       this.readRawOptional();
       const keys = (this.readRawGroup() ?? '').split(',').map((k) => k.trim()).filter(Boolean);
@@ -732,7 +757,7 @@ class LatexScanner {
       if (spaced) this.emitSpace(this.pos, this.pos);
       return false;
     }
-    if (SECTION_MACROS.has(name)) {
+    if (known === SECTION) {
       this.readRawOptional();
       this.scanAside('heading', true);
       return false;
@@ -742,12 +767,12 @@ class LatexScanner {
       this.expand(user, p, spaced);
       return false;
     }
-    if (name in SYMBOL_MACROS) {
+    if (known === SYMBOL) {
       this.emit(SYMBOL_MACROS[name], p, afterName);
       if (spaced && isWord) this.emitSpace(afterName, this.pos);
       return false;
     }
-    if (TRANSPARENT_ONE_ARG.has(name)) {
+    if (known === TRANSPARENT) {
       const s = this.src;
       if (name === 'ensuremath') {
         if (this.mathDepth > 0) this.scanArgument();
@@ -762,8 +787,8 @@ class LatexScanner {
       } else if (this.pos < s.length && (s[this.pos] === '{' || s[this.pos] === '\\')) this.scanArgument();
       return false;
     }
-    if (FONT_SWITCHES.has(name)) return false;
-    if (name in DROPPED_WITH_ARGS) {
+    if (known === FONT) return false;
+    if (known === DROPPED) {
       this.readRawOptional();
       for (let i = 0; i < DROPPED_WITH_ARGS[name]; i++) this.readRawGroup();
       return false;
@@ -1035,11 +1060,10 @@ class LatexScanner {
     const text = reading.text;
     const blocks: Block[] = [];
     const math: MathSpan[] = [];
-    const offsets = new Map<Draft, number>();
     const blank = (c: number) => c === 32 || c === 10;
     drafts.forEach((d, i) => {
       const start = starts[i];
-      offsets.set(d, start);
+      d.readingStart = start;
       // The block is its non-blank part.
       let a = start;
       let e = start + d.out.length;
@@ -1057,10 +1081,9 @@ class LatexScanner {
     /** Start in the reading text of the first non-empty draft at or after each finished index. */
     const startFrom: number[] = new Array(this.finished.length + 1);
     startFrom[this.finished.length] = reading.text.length;
-    for (let i = this.finished.length - 1; i >= 0; i--) startFrom[i] = offsets.get(this.finished[i]) ?? startFrom[i + 1];
+    for (let i = this.finished.length - 1; i >= 0; i--) startFrom[i] = this.finished[i].readingStart >= 0 ? this.finished[i].readingStart : startFrom[i + 1];
     const where = ({ draft, offset, finishedBefore }: Anchor) => {
-      const base = offsets.get(draft);
-      if (base !== undefined) return base + Math.min(offset, draft.out.length);
+      if (draft.readingStart >= 0) return draft.readingStart + Math.min(offset, draft.out.length);
       // the draft produced no text (the preamble, say): the item stands before the next block
       return startFrom[finishedBefore];
     };

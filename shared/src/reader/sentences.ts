@@ -30,9 +30,12 @@ export function splitSentences(text: string, blocks: readonly Block[], math: rea
   for (const block of blocks) {
     let start = block.start;
     while (start < block.end && isSpace(text[start])) start++;
-    for (let i = start; i < block.end; i++) {
+    // Jump from one '.', '!' or '?' to the next (a native search, not a loop over characters).
+    const stop = /[.!?]/g;
+    stop.lastIndex = start;
+    for (let hit = stop.exec(text); hit !== null && hit.index < block.end; hit = stop.exec(text)) {
+      const i = hit.index;
       const c = text[i];
-      if (c !== '.' && c !== '!' && c !== '?') continue;
       while (m < math.length && math[m].end <= i) m++;
       if (m < math.length && math[m].start <= i && i < math[m].end) continue;
       let j = i + 1;
@@ -49,7 +52,7 @@ export function splitSentences(text: string, blocks: readonly Block[], math: rea
       }
       out.push({ start, end: j });
       start = k;
-      i = k - 1;
+      stop.lastIndex = k;
     }
     let end = block.end;
     while (end > start && isSpace(text[end - 1])) end--;
