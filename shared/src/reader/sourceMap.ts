@@ -60,12 +60,16 @@ function isBlankCode(c: number): boolean {
 
 /** Collects the pieces of every draft of one document. */
 export class OutputStore {
-  private records = new Int32Array(1 << 12);
+  private records: Int32Array;
   private count = 0;
   private readonly strings: string[] = [];
   private nextId = 0;
 
-  constructor(private readonly source: string) {}
+  constructor(private readonly source: string) {
+    // About one piece per 8 characters of source: allocated once, so that growing it neither
+    // copies nor keeps the young-generation collector busy.
+    this.records = new Int32Array(Math.max(1 << 12, Math.ceil(source.length / 8)) * R_STRIDE);
+  }
 
   /** A new, empty output. */
   draft(): Draft {
