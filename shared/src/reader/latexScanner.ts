@@ -66,7 +66,8 @@ type Terminator =
 interface Draft {
   readonly kind: BlockKind;
   readonly out: Output;
-  readonly math: MathSpan[];
+  /** Math spans in the draft, created on the first one (most drafts have none). */
+  math: MathSpan[] | null;
   cell?: TableCellPosition;
   /** Where the draft starts in the reading text, once assembled (−1 before, or if empty). */
   readingStart: number;
@@ -156,7 +157,7 @@ class LatexScanner {
   }
 
   private newDraft(kind: BlockKind): Draft {
-    return { kind, out: this.store.draft(), math: [], readingStart: -1 };
+    return { kind, out: this.store.draft(), math: null, readingStart: -1 };
   }
 
   // ---- source access -------------------------------------------------------------------
@@ -511,7 +512,7 @@ class LatexScanner {
     this.mathDepth++;
     this.loop(term);
     this.mathDepth--;
-    if (!this.silent) draft.math.push({ start: outStart, end: draft.out.length, display });
+    if (!this.silent) (draft.math ??= []).push({ start: outStart, end: draft.out.length, display });
   }
 
   private openDollarMath(p: number): void {
@@ -782,7 +783,7 @@ class LatexScanner {
           this.mathDepth++;
           this.scanArgument();
           this.mathDepth--;
-          if (!this.silent) draft.math.push({ start: outStart, end: draft.out.length, display: false });
+          if (!this.silent) (draft.math ??= []).push({ start: outStart, end: draft.out.length, display: false });
         }
       } else if (this.pos < s.length && (s[this.pos] === '{' || s[this.pos] === '\\')) this.scanArgument();
       return false;
@@ -1070,7 +1071,7 @@ class LatexScanner {
       while (a < e && blank(text.charCodeAt(a))) a++;
       while (e > a && blank(text.charCodeAt(e - 1))) e--;
       if (e > a) blocks.push(d.cell ? { kind: d.kind, start: a, end: e, cell: d.cell } : { kind: d.kind, start: a, end: e });
-      for (const m of d.math) {
+      for (const m of d.math ?? []) {
         let ms = start + m.start;
         let me = start + m.end;
         while (ms < me && blank(text.charCodeAt(ms))) ms++;
