@@ -29,7 +29,7 @@ const markdown = syntheticMarkdownManuscript(1_000_000);
 console.log('\nComove reader benchmark');
 console.log(`  LaTeX manuscript ${(latex.length / 1e6).toFixed(2)} MB, Markdown manuscript ${(markdown.length / 1e6).toFixed(2)} MB (synthetic, test/bench/syntheticManuscript.ts)\n`);
 
-const ours = timeRuns('LaTeX reader (readLatex)', latex.length, 30, () => readLatex(latex));
+const ours = timeRuns('LaTeX reader (readLatex)', latex.length, 30, () => readLatex(latex), 10);
 timeRuns('LaTeX reader + claim extraction', latex.length, 10, () => extractClaims(readLatex(latex)));
 {
   const before = process.memoryUsage().heapUsed;
