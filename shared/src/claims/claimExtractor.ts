@@ -10,6 +10,7 @@
 import type { DocumentReading, Sentence } from '../reader/documentReading.js';
 import { KIND_CUES, NEEDS_REDSHIFT, PURE_NUMBER_CUES, type ClaimKind } from './claimKinds.js';
 import { findDeclarations, parameterStatements, type Declaration, type DeclarationScan } from './declarations.js';
+import { ARCSEC_RAD } from '../cosmology/constants.js';
 import type { Unit } from '../cosmology/units.js';
 import { findNumbers, unitAt, type StatedNumber } from './numberParser.js';
 import { findRedshifts, type RedshiftMention } from './redshifts.js';
@@ -114,6 +115,15 @@ export function extractClaims(doc: DocumentReading): ClaimScan {
     const measured = MEASURED.test(sentenceText) && !/\badopt|\bassum/i.test(sentenceText);
 
     const found: Array<Omit<Claim, 'z' | 'zRange' | 'zSource' | 'unchecked' | 'confidence'> & { cueDistance: number }> = [];
+    /** Records a claim on number n, ending at `end` (the unit's end, or the number's). */
+    const add = (kind: ClaimKind, n: StatedNumber, end: number, cueDistance = 0, extra: { angleArcsec?: number; parameter?: string; sinceEpoch?: 'recombination' | null } = {}) =>
+      found.push({
+        kind, value: n, angleArcsec: extra.angleArcsec ?? null, parameter: extra.parameter ?? null, sinceEpoch: extra.sinceEpoch ?? null,
+        start: n.start, end, sentenceStart: sentence.start, sentenceEnd: sentence.end, cueDistance,
+      });
+    /** A proper (or, if the text says so, comoving) scale claim; with the angle when a size is stated for one. */
+    const addScale = (n: StatedNumber, near: string, angleArcsec?: number) =>
+      add(/comoving/i.test(near) ? 'comovingScale' : 'properScale', n, n.unit!.end, 0, angleArcsec === undefined ? {} : { angleArcsec });
     numbers.forEach((stated, index) => {
       let n = stated;
       if (inSkip(n.start) || inDeclaration(n.start)) return;
@@ -121,7 +131,7 @@ export function extractClaims(doc: DocumentReading): ClaimScan {
         // Ω and H0 statements outside a declaration are density and Hubble-constant claims.
         const st = statementRanges.find((x) => n.start >= x.start && n.start < x.end)!;
         if (st.key !== 'H0' && st.key !== 'h' && !measured) {
-          found.push({ kind: 'densityParameter', value: n, angleArcsec: null, parameter: st.key, sinceEpoch: null, start: n.start, end: n.end, sentenceStart: sentence.start, sentenceEnd: sentence.end, cueDistance: 0 });
+          add('densityParameter', n, n.end, 0, { parameter: st.key });
         }
         return;
       }
@@ -140,7 +150,7 @@ export function extractClaims(doc: DocumentReading): ClaimScan {
         // A redshift is a claim only when it names an epoch ("recombination at z ≈ 1100").
         const epoch = pureNumberKind(near, n);
         if (epoch && (epoch.kind === 'recombination' || epoch.kind === 'matterRadiationEquality' || epoch.kind === 'dragEpoch' || epoch.kind === 'accelerationOnset')) {
-          found.push({ kind: epoch.kind, value: n, angleArcsec: null, parameter: null, sinceEpoch: null, start: n.start, end: n.end, sentenceStart: sentence.start, sentenceEnd: sentence.end, cueDistance: epoch.distance });
+          add(epoch.kind, n, n.end, epoch.distance);
         }
         return;
       }
@@ -154,7 +164,7 @@ export function extractClaims(doc: DocumentReading): ClaimScan {
         const lastBefore = [...clauseBefore.matchAll(new RegExp(COMPONENT.source, 'gi'))].pop();
         const component = right ?? lastBefore ?? COMPONENT.exec(clauseAfter);
         if (component && /universe|budget|energy density|content|composition|made|consists|dark energy|dark matter/i.test(sentenceText)) {
-          found.push({ kind: 'compositionPercentage', value: n, angleArcsec: null, parameter: component[1].toLowerCase(), sinceEpoch: null, start: n.start, end: n.unit.end, sentenceStart: sentence.start, sentenceEnd: sentence.end, cueDistance: 0 });
+          add('compositionPercentage', n, n.unit.end, 0, { parameter: component[1].toLowerCase() });
         }
         return;
       }
@@ -163,36 +173,31 @@ export function extractClaims(doc: DocumentReading): ClaimScan {
         const dims = unit.dimensions as unknown as Record<string, number>;
         // Scales: length per angle.
         if (dims.length === 1 && dims.angle === -1) {
-          const kind: ClaimKind = /comoving/i.test(near) ? 'comovingScale' : 'properScale';
-          found.push({ kind, value: n, angleArcsec: null, parameter: null, sinceEpoch: null, start: n.start, end: n.unit!.end, sentenceStart: sentence.start, sentenceEnd: sentence.end, cueDistance: 0 });
+          addScale(n, near);
           return;
         }
+        const lengthOnly = dims.length === 1 && Object.keys(dims).every((k) => k === 'length' || dims[k] === 0);
         // "1″ corresponds to 8.4 kpc": a length after an angle.
-        if (dims.length === 1 && Object.keys(dims).every((k) => k === 'length' || dims[k] === 0) && index > 0) {
+        if (lengthOnly && index > 0) {
           const prev = numbers[index - 1];
           const prevUnit = prev.unit?.unit;
           const link = text.slice(prev.unit ? prev.unit.end : prev.end, n.start);
           if (prevUnit && (prevUnit.dimensions.angle === 1) && ANGLE_TO_LENGTH.test(link)) {
-            const arcsec = prev.value * (prevUnit.factor / (Math.PI / 648_000));
-            const kind: ClaimKind = /comoving/i.test(near) ? 'comovingScale' : 'properScale';
-            found.push({ kind, value: n, angleArcsec: arcsec, parameter: null, sinceEpoch: null, start: n.start, end: n.unit!.end, sentenceStart: sentence.start, sentenceEnd: sentence.end, cueDistance: 0 });
+            addScale(n, near, prev.value * (prevUnit.factor / ARCSEC_RAD));
             return;
           }
         }
         // "4.4 and 6.1 kpc …, which corresponds to 1.0″": an angle after the lengths.
-        if (dims.length === 1 && Object.keys(dims).every((k) => k === 'length' || dims[k] === 0)) {
+        if (lengthOnly) {
           const angle = numbers.slice(index + 1).find((m) => m.unit?.unit?.dimensions.angle === 1);
           if (angle && /(?:corresponds?|correspond)\s+to\s*$|subtends?\s*$/i.test(text.slice(n.unit!.end, angle.start))) {
-            const arcsec = angle.value * (angle.unit!.unit!.factor / (Math.PI / 648_000));
-            const kind: ClaimKind = /comoving/i.test(near) ? 'comovingScale' : 'properScale';
-            found.push({ kind, value: n, angleArcsec: arcsec, parameter: null, sinceEpoch: null, start: n.start, end: n.unit!.end, sentenceStart: sentence.start, sentenceEnd: sentence.end, cueDistance: 0 });
+            addScale(n, near, angle.value * (angle.unit!.unit!.factor / ARCSEC_RAD));
             return;
           }
         }
         // "one arcsecond corresponds to 5.5 kpc"
-        if (dims.length === 1 && Object.keys(dims).every((k) => k === 'length' || dims[k] === 0) && /\b(?:one|an|each|a single)\s+(?:arcsec(?:ond)?|″)\s+(?:corresponds?\s+to|is|spans|equals)\s*(?:about |roughly |∼ ?|≈ ?|~ ?)?$/i.test(near)) {
-          const kind: ClaimKind = /comoving/i.test(near) ? 'comovingScale' : 'properScale';
-          found.push({ kind, value: n, angleArcsec: 1, parameter: null, sinceEpoch: null, start: n.start, end: n.unit!.end, sentenceStart: sentence.start, sentenceEnd: sentence.end, cueDistance: 0 });
+        if (lengthOnly && /\b(?:one|an|each|a single)\s+(?:arcsec(?:ond)?|″)\s+(?:corresponds?\s+to|is|spans|equals)\s*(?:about |roughly |∼ ?|≈ ?|~ ?)?$/i.test(near)) {
+          addScale(n, near, 1);
           return;
         }
         // The cue nearest before the number (or just after it: "6.6 Gpc for the luminosity distance").
@@ -223,7 +228,7 @@ export function extractClaims(doc: DocumentReading): ClaimScan {
         else if (dims.time === 1 && /^\s*old\b/i.test(afterUnit) && kind === 'lookbackTime') kind = 'age';
         const clauseBefore = before.slice(Math.max(before.lastIndexOf(';'), before.lastIndexOf(',')) + 1);
         if (kind === 'age' && (/^\s*(?:old\s*)?(?:today|now|at present|at z\s*=\s*0\b)/i.test(afterUnit) || /\b(?:today|now|at present|presently|currently)\b/i.test(clauseBefore))) kind = 'ageToday';
-        found.push({ kind, value: n, angleArcsec: null, parameter: null, sinceEpoch: null, start: n.start, end: n.unit!.end, sentenceStart: sentence.start, sentenceEnd: sentence.end, cueDistance: best.distance });
+        add(kind, n, n.unit!.end, best.distance);
         return;
       }
 
@@ -231,7 +236,7 @@ export function extractClaims(doc: DocumentReading): ClaimScan {
         const pure = pureNumberKind(near, n);
         if (pure) {
           const since = pure.kind === 'expansionFactor' && /recombination|decoupling|last[- ]scattering|CMB/i.test(sentenceText) ? 'recombination' : null;
-          found.push({ kind: pure.kind, value: n, angleArcsec: null, parameter: null, sinceEpoch: since, start: n.start, end: n.end, sentenceStart: sentence.start, sentenceEnd: sentence.end, cueDistance: pure.distance });
+          add(pure.kind, n, n.end, pure.distance, { sinceEpoch: since });
         }
       }
     });
@@ -245,7 +250,7 @@ export function extractClaims(doc: DocumentReading): ClaimScan {
       const exact = m[2] !== undefined;
       const n: StatedNumber = { value, start: at, end: at + m[0].length, digitsStart: at, digitsEnd: at + m[0].length, text: m[0], significantDigits: 1, resolution: exact ? 1 : value, qualifier: exact ? 'exact' : 'approximate', relation: null, uncertainty: null, range: null, unit: null };
       const since = /recombination|decoupling|last[- ]scattering|CMB/i.test(sentenceText) ? 'recombination' : null;
-      found.push({ kind: 'expansionFactor', value: n, angleArcsec: null, parameter: null, sinceEpoch: since, start: n.start, end: n.end, sentenceStart: sentence.start, sentenceEnd: sentence.end, cueDistance: 0 });
+      add('expansionFactor', n, n.end, 0, { sinceEpoch: since });
     }
 
     // Bind the redshift-dependent claims.
