@@ -110,7 +110,7 @@ const SYMBOL = 4;
 const TRANSPARENT = 5;
 const FONT = 6;
 const DROPPED = 7;
-/** Which table knows each macro name (the first one wins, in the order macro() consults them). */
+/** Which table knows each macro name: filled from the lowest priority to the highest, so that a name in several tables belongs to the one macro() consults first. */
 const MACRO_CLASS = new Map<string, number>();
 for (const [names, cls] of [
   [Object.keys(DROPPED_WITH_ARGS), DROPPED],
