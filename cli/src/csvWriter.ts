@@ -102,7 +102,8 @@ export function columnsToCsv(header: string, columns: readonly Float64Array[]): 
   const headerBytes = new TextEncoder().encode(header + '\n');
   const rows = columns.length ? columns[0].length : 0;
   const rowMax = columns.length * (MAX_NUMBER_BYTES + 1);
-  let b = new Uint8Array(headerBytes.length + Math.min(rows, 1 << 16) * rowMax + rowMax);
+  // Sized for a typical 15 bytes a value; grown (rarely) when the numbers are longer.
+  let b = new Uint8Array(headerBytes.length + rows * columns.length * 15 + rowMax);
   b.set(headerBytes);
   let len = headerBytes.length;
   const digits = new Uint8Array(12);
