@@ -15,6 +15,29 @@ const PAIR_HIGH = Uint8Array.from({ length: 100 }, (_, k) => 48 + Math.floor(k /
 const PAIR_LOW = Uint8Array.from({ length: 100 }, (_, k) => 48 + (k % 10));
 const INFINITY_BYTES = Uint8Array.from('Infinity', (ch) => ch.charCodeAt(0));
 
+/** 12 significant digits, trailing zeros trimmed, by toPrecision (for the extremes of the double range). */
+function formatExtreme(v: number): string {
+  const [mantissa, exponent] = v.toPrecision(12).split('e');
+  const trimmed = mantissa.includes('.') ? mantissa.replace(/0+$/, '').replace(/\.$/, '') : mantissa;
+  return exponent === undefined ? trimmed : `${trimmed}e${exponent.replace('+', '')}`;
+}
+
+/** Powers of ten from 1e-8 to 1e16, for finding a decimal exponent by comparisons. */
+const DECADES = Float64Array.from({ length: 25 }, (_, i) => 10 ** (i - 8));
+
+/** floor(log10(v)) for v > 0: a binary search over DECADES (cheaper than Math.log10), log10 outside them. */
+function decimalExponent(v: number): number {
+  if (!(v >= 1e-8 && v < 1e16)) return Math.floor(Math.log10(v));
+  let lo = 0;
+  let hi = DECADES.length - 1;
+  while (hi - lo > 1) {
+    const mid = (lo + hi) >> 1;
+    if (DECADES[mid] <= v) lo = mid;
+    else hi = mid;
+  }
+  return lo - 8;
+}
+
 /**
  * Writes v at b[len] with 12 significant digits, trailing zeros removed; plain notation for
  * 1e-5 ≤ |v| < 1e12, otherwise d.ddde±x. NaN writes nothing (an empty cell). Returns the new
@@ -34,7 +57,14 @@ export function writeNumber(b: Uint8Array, len: number, v: number, digits: Uint8
     b.set(INFINITY_BYTES, len);
     return len + INFINITY_BYTES.length;
   }
-  let exp = Math.floor(Math.log10(v));
+  // The decimal exponent from the binary one (log10(2) ≈ 0.30103), corrected below if off by one.
+  if (v < 1e-290 || v > 1e290) {
+    // Where the power-of-ten table under- or overflows, the slow way.
+    const text = formatExtreme(v);
+    for (let i = 0; i < text.length; i++) b[len++] = text.charCodeAt(i);
+    return len;
+  }
+  let exp = decimalExponent(v);
   let mant = Math.round(v / POW10[exp + 339]);
   // log10 can be off by one near powers of ten; normalise the mantissa to 12 digits.
   if (mant >= 1e12) {
