@@ -160,6 +160,8 @@ export function unitAt(text: string, pos: number, cache?: Map<string, Unit | nul
     lastEnd = q;
   }
   if (!pieces.length) return null;
+  // A token's exponent pattern may have taken white space after it: the unit ends at its last character.
+  while (lastEnd > p && /\s/.test(text[lastEnd - 1])) lastEnd--;
   let written = text.slice(p, lastEnd);
   // Scale units: "kpc/″", "kpc per arcsec".
   const perAngle = /^\s*(?:\/|per)\s*(″|′|arcsec|arcmin|'')/.exec(text.slice(lastEnd, lastEnd + 12));
