@@ -93,3 +93,22 @@ describe('binding to a redshift', () => {
     expect(claimsOf('% comove: skip-next-line\nAt $z = 1$ the age is 5.8\\,Gyr.')).toEqual([]);
   });
 });
+
+describe('notations seen in drafts', () => {
+  const cases: Array<[string, Array<[string, string, number | null]>]> = [
+    [String.raw`At $z\!=\!2$ the luminosity distance is $d_{\rm L}\simeq 15.5\,{\rm Gpc}$.`, [['luminosityDistance', '15.5 Gpc', 2]]],
+    [String.raw`At $z = 1$, $D_{\rm A} = 1.65\,\mathrm{Gpc}$ and $D_\mathrm{L}=6.6\,\rm{Gpc}$.`, [['angularDiameterDistance', '1.65 Gpc', 1], ['luminosityDistance', '6.6 Gpc', 1]]],
+    [String.raw`The lookback time to $z=0.5$ is $t_{\rm lb}\approx5.0$\,Gyr.`, [['lookbackTime', '5.0 Gyr', 0.5]]],
+    [String.raw`At $z$\,=\,0.5 the age was $\sim$8.4~Gyr.`, [['age', '8.4 Gyr', 0.5]]],
+    [String.raw`For $z = 3$, $1''$ corresponds to 7.7~kpc.`, [['properScale', '7.7 kpc', 3]]],
+    [String.raw`At $z = 3$ the scale is 7.7\,kpc\,arcsec$^{-1}$ (proper).`, [['properScale', '7.7 kpc arcsec^-1', 3]]],
+    [String.raw`The comoving volume to $z=2$ is $\approx 580\,h_{70}^{-3}$\,Gpc$^3$.`, [['comovingVolume', '580 h_70^-3 Gpc^3', 2]]],
+    [String.raw`The Universe is 13.8~Gyr old, and at $z=6$ it was only $\sim 0.9$~Gyr old.`, [['ageToday', '13.8 Gyr', null], ['age', '0.9 Gyr', 6]]],
+    [String.raw`at $z = 0.5$ ($D_L = 2.8$~Gpc; see Table~\ref{tab}) and at $z=1$ ($D_L = 6.6$~Gpc)`, [['luminosityDistance', '2.8 Gpc', 0.5], ['luminosityDistance', '6.6 Gpc', 1]]],
+  ];
+  for (const [src, expected] of cases) {
+    it(src, () => {
+      expect(claimsOf(src).map((c) => [c.kind, c.text, c.z])).toEqual(expected);
+    });
+  }
+});
