@@ -11,19 +11,6 @@
 import type { CosmologyParameters } from './parameters.js';
 import { neutrinoDensity, neutrinoDensityLogDerivative, type NeutrinoModel } from './neutrinos.js';
 
-/** Densities of each component at one redshift, relative to the critical density at that redshift. */
-export interface DensityFractions {
-  /** Cold dark matter, baryons and the non-relativistic excess of massive neutrinos. */
-  readonly matter: number;
-  readonly baryons: number | null;
-  readonly photons: number;
-  readonly neutrinos: number;
-  /** Photons and all neutrinos. */
-  readonly radiation: number;
-  readonly darkEnergy: number;
-  readonly curvature: number;
-}
-
 /** Fast evaluator of E(z) and its derivative for one parameter set. */
 export class Expansion {
   readonly params: CosmologyParameters;
@@ -130,22 +117,5 @@ export class Expansion {
   /** Dark-energy density relative to ρc0. */
   darkEnergyDensity(zp1: number): number {
     return this.params.Omega_Lambda === 0 ? 0 : this.params.Omega_Lambda * this.darkEnergyScale(zp1);
-  }
-
-  /** Density fractions Ω_i(z) = ρ_i(z)/ρc(z) of each component (Hogg 1999 §2, generalised). */
-  densityFractions(zp1: number): DensityFractions {
-    const p = this.params;
-    const e2 = this.e2(zp1);
-    const nu = this.neutrinoDensity(zp1);
-    const photons = p.Omega_gamma * zp1 ** 4;
-    return {
-      matter: this.matterDensity(zp1) / e2,
-      baryons: p.Omega_b === null ? null : (p.Omega_b * zp1 ** 3) / e2,
-      photons: photons / e2,
-      neutrinos: nu / e2,
-      radiation: this.radiationDensity(zp1) / e2,
-      darkEnergy: this.darkEnergyDensity(zp1) / e2,
-      curvature: (p.Omega_k * zp1 * zp1) / e2,
-    };
   }
 }

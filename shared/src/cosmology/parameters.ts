@@ -15,6 +15,7 @@ import {
   STANDARD_N_EFF,
   photonDensityParameter,
 } from './constants.js';
+import { Expansion } from './expansion.js';
 import { createNeutrinoModel, masslessNeutrinoDensityToday, neutrinoDensity, type NeutrinoModel } from './neutrinos.js';
 
 /** Keys of the declaration syntax, in the trade's symbols. */
@@ -239,7 +240,7 @@ export function resolveParameters(input: ParameterInput): ResolveResult {
     Omega_gamma: omegaGamma, Omega_nu: omegaNu, Omega_r: omegaR, Omega_Lambda: omegaL, Omega_k: omegaK,
     w0, wa, T_CMB: tCmb, N_eff: nEff, m_nu: mNu, flat, stated, assumed,
   };
-  const bounce = findNonPositiveExpansion(params, neutrinos);
+  const bounce = findNonPositiveExpansion(new Expansion(params, neutrinos));
   if (bounce !== null) {
     const who = input.Omega_Lambda !== undefined ? 'Omega_Lambda' : input.Omega_k !== undefined ? 'Omega_k' : input.w0 !== undefined || input.wa !== undefined ? 'w0' : 'Omega_m';
     return {
@@ -256,16 +257,13 @@ export function resolveParameters(input: ParameterInput): ResolveResult {
  * redshift where it is not positive, or null. Beyond 10⁸ the highest power of (1+z) wins
  * and its coefficient is checked.
  */
-function findNonPositiveExpansion(p: CosmologyParameters, nu: NeutrinoModel): number | null {
-  const e2 = (zp1: number) => {
-    const de = p.Omega_Lambda === 0 ? 0 : p.Omega_Lambda * Math.pow(zp1, 3 * (1 + p.w0 + p.wa)) * Math.exp(-3 * p.wa * (1 - 1 / zp1));
-    return p.Omega_cb * zp1 ** 3 + p.Omega_gamma * zp1 ** 4 + neutrinoDensity(nu, zp1) + p.Omega_k * zp1 * zp1 + de;
-  };
+function findNonPositiveExpansion(expansion: Expansion): number | null {
+  const p = expansion.params;
   const steps = 800;
   const xMax = Math.log(1e8);
   for (let i = 0; i <= steps; i++) {
     const zp1 = Math.exp((xMax * i) / steps);
-    if (!(e2(zp1) > 0)) return zp1 - 1;
+    if (!(expansion.e2(zp1) > 0)) return zp1 - 1;
   }
   // Leading behaviour as z → ∞: dark energy with w_early = w0 + wa > 1/3 dominates if negative.
   const wEarly = p.w0 + p.wa;

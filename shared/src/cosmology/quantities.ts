@@ -8,12 +8,12 @@
  * redshifts costs little more than its distances.
  */
 
-import { ARCSEC_RAD, FIXSEN_2009_T_CMB_K, SQUARE_DEGREE_SR } from './constants.js';
+import { ARCSEC_RAD, SQUARE_DEGREE_SR } from './constants.js';
 import type { Cosmology } from './cosmology.js';
 import { comovingVolumeWithin, distanceModulusFromLuminosityDistance, transverseFromLineOfSight } from './distances.js';
 import { checkRedshift } from './errors.js';
 import { growthFactor, growthRate } from './growth.js';
-import { criticalDensityForHubble, KG_M3_IN_G_CM3, KG_M3_IN_SOLAR_MPC3 } from './times.js';
+import { cmbTemperature, criticalDensityForHubble, KG_M3_IN_G_CM3, KG_M3_IN_SOLAR_MPC3 } from './times.js';
 
 /** One redshift of one parameter set, with its intermediate values computed on first use. */
 export class RedshiftPoint {
@@ -114,7 +114,7 @@ export const QUANTITIES: readonly QuantityDefinition[] = [
   },
   {
     key: 'cmbTemperature', label: 'CMB temperature', unit: 'K', source: 'T = T0 (1+z); T0 from the parameter set, else Fixsen 2009',
-    compute: (p) => (p.cosmology.params.T_CMB > 0 ? p.cosmology.params.T_CMB : FIXSEN_2009_T_CMB_K) * p.zp1,
+    compute: (p) => cmbTemperature(p.cosmology, p.z),
   },
   { key: 'criticalDensity', label: 'critical density', unit: 'g cm^-3', source: 'ρc = 3H²/(8πG)', compute: (p) => criticalDensityForHubble(p.hubbleParameter) * KG_M3_IN_G_CM3 },
   { key: 'criticalDensitySolar', label: 'critical density', unit: 'Msun Mpc^-3', source: 'ρc = 3H²/(8πG)', compute: (p) => criticalDensityForHubble(p.hubbleParameter) * KG_M3_IN_SOLAR_MPC3 },
@@ -122,7 +122,7 @@ export const QUANTITIES: readonly QuantityDefinition[] = [
   { key: 'omegaRadiation', label: 'Ωr(z)', unit: '', source: 'ρr(z)/ρc(z)', compute: (p) => p.fraction(p.cosmology.expansion.radiationDensity(p.zp1)) },
   { key: 'omegaDarkEnergy', label: 'Ωde(z)', unit: '', source: 'ρde(z)/ρc(z)', compute: (p) => p.fraction(p.cosmology.expansion.darkEnergyDensity(p.zp1)) },
   { key: 'omegaCurvature', label: 'Ωk(z)', unit: '', source: 'Ωk(1+z)²/E²', compute: (p) => p.fraction(p.cosmology.params.Omega_k * p.zp1 * p.zp1) },
-  { key: 'deceleration', label: 'deceleration parameter q', unit: '', source: 'q = (1/2) d ln E²/d ln(1+z) − 1', compute: (p) => (0.5 * p.cosmology.expansion.de2dx(p.zp1)) / p.e2 - 1 },
+  { key: 'deceleration', label: 'deceleration parameter q', unit: '', source: 'q = (1/2) d ln E²/d ln(1+z) − 1', compute: (p) => p.cosmology.expansion.deceleration(p.zp1) },
   { key: 'growthFactor', label: 'linear growth factor D (D(0) = 1)', unit: '', source: 'growth ODE (Linder 2005, eq. 1)', compute: (p) => growthFactor(p.cosmology, p.z) },
   { key: 'growthRate', label: 'growth rate f = d ln D/d ln a', unit: '', source: 'growth ODE (Linder 2005, eq. 1)', compute: (p) => growthRate(p.cosmology, p.z) },
 ];
