@@ -11,6 +11,7 @@ import {
   evaluateQuantities,
   formatParameterInput,
   parseParameterText,
+  findQuantity,
   QUANTITIES,
   type Cosmology,
   type Epochs,
@@ -106,7 +107,7 @@ export function runCalc(argv: string[], io: CliIo): number {
   const redshifts = parseRedshiftList(zText, values.z.startsWith('@') ? values.z.slice(1) : '--z');
   const keys = values.quantities ? values.quantities.split(',').map((k) => k.trim()).filter(Boolean) : QUANTITIES.map((q) => q.key);
   for (const k of keys) {
-    if (!QUANTITIES.some((q) => q.key === k)) throw new UsageError(`--quantities: unknown quantity '${k}' (see 'comove calc --list')`);
+    if (!findQuantity(k)) throw new UsageError(`--quantities: unknown quantity '${k}' (see 'comove calc --list')`);
   }
   const withEpochs = !values['no-epochs'];
   if (format === 'csv') {
@@ -128,7 +129,7 @@ function readList(io: CliIo, path: string): string {
 }
 
 function unitOf(key: string): string {
-  return QUANTITIES.find((q) => q.key === key)?.unit ?? '';
+  return findQuantity(key)?.unit ?? '';
 }
 
 /** CSV: a header of keys with units in brackets, then one line per redshift (12 significant digits). */
@@ -207,7 +208,7 @@ export function toText(c: Cosmology, keys: readonly string[], rows: readonly Qua
     const block = rows.slice(start, start + TEXT_COLUMNS_PER_BLOCK);
     const table: string[][] = [['', 'unit', ...block.map((r) => `z = ${formatNumber(r.z)}`)]];
     for (const k of keys) {
-      const q = QUANTITIES.find((d) => d.key === k)!;
+      const q = findQuantity(k)!;
       table.push([`${q.label}`, q.unit || '', ...block.map((r) => formatNumber(r[k], TEXT_DIGITS))]);
     }
     out.push('', ...alignColumns(table));

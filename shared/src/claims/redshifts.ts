@@ -87,10 +87,9 @@ export function findRedshifts(text: string, from = 0, to = text.length, known?: 
     const at = from + m.index!;
     const symbol = m[0];
     if (EPOCH_SUBSCRIPT.test(symbol.slice(1))) continue;
-    // "z-band", "m_z": not a redshift
-    if (/[-_]$/.test(text.slice(Math.max(0, at - 1), at)) && text[at - 1] === '_') continue;
     const n = numberAt(at + symbol.length);
-    if (n && m[1] !== '<' && m[1] !== '>' && m[1] !== '≤' && m[1] !== '≥' && m[1] !== '≲' && m[1] !== '≳') add(at, n);
+    // A bound ("z > 2") names no one redshift; "m_z" and "z-band" never match (see Z_SYMBOL).
+    if (n && !/[<>≤≥≲≳]/.test(m[1])) add(at, n);
   }
   for (const m of slice.matchAll(REDSHIFT_WORD)) {
     const at = from + m.index!;
