@@ -50,19 +50,27 @@ export function runExtract(argv: string[], io: CliIo): number {
     return EXIT.ok;
   }
   if (positionals.length === 0) throw new UsageError('extract needs at least one file');
-  const resolver = fileResolver(io);
+  // Every file is read once: the text that was extracted is also the one positions are counted in.
+  const texts = new Map<string, string>();
+  const remembering: CliIo = {
+    ...io,
+    readFile: (path) => {
+      const text = texts.get(path) ?? io.readFile(path);
+      texts.set(path, text);
+      return text;
+    },
+  };
+  const resolver = fileResolver(remembering);
   const files: FileExtraction[] = [];
   for (const path of positionals) {
     let text: string;
     try {
-      text = io.readFile(path);
+      text = remembering.readFile(path);
     } catch (e) {
       throw new UsageError(`cannot read ${path}: ${(e as Error).message}`);
     }
     files.push(...extractProject({ uri: path, text }, resolver).files);
   }
-  const texts = new Map<string, string>();
-  for (const f of files) if (!texts.has(f.uri)) texts.set(f.uri, io.readFile(f.uri));
   if (values.json) io.stdout(JSON.stringify({ files: files.map((f) => fileJson(f, texts.get(f.uri)!)) }, null, 1) + '\n');
   else io.stdout(files.map((f) => fileText(f, texts.get(f.uri)!)).join('\n'));
   return EXIT.ok;
