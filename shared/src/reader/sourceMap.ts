@@ -122,14 +122,27 @@ export class OutputStore {
 
   /** Appends `text` standing for source[start, end). */
   replace(d: Draft, text: string, start: number, end: number): void {
-    if ((d.last === 0 || isBlankCode(d.last)) && text.length && isBlankCode(text.charCodeAt(0))) text = text.replace(/^\s+/, '');
-    if (!text) return;
-    if (d.blank && text !== ' ' && /\S/.test(text)) d.blank = false;
-    d.last = text.charCodeAt(text.length - 1);
     if (text === ' ') {
+      if (d.last === 0 || isBlankCode(d.last)) return;
+      d.last = 32;
       this.push(d, start, end, SPACE, 1);
       return;
     }
+    if (d.last === 0 || isBlankCode(d.last)) {
+      let lead = 0;
+      while (lead < text.length && isBlankCode(text.charCodeAt(lead))) lead++;
+      if (lead > 0) text = text.slice(lead);
+    }
+    if (!text) return;
+    if (d.blank) {
+      for (let i = 0; i < text.length; i++) {
+        if (!isBlankCode(text.charCodeAt(i))) {
+          d.blank = false;
+          break;
+        }
+      }
+    }
+    d.last = text.charCodeAt(text.length - 1);
     this.strings.push(text);
     this.push(d, start, end, this.strings.length - 1, text.length);
   }
