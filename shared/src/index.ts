@@ -5,3 +5,4 @@
 export * from './cosmology/index.js';
 export * from './reader/index.js';
 export * from './claims/index.js';
+export * from './check/index.js';

@@ -27,6 +27,8 @@ export const MAX_INCLUDE_DEPTH = 16;
 
 export interface FileExtraction {
   readonly uri: string;
+  /** The source text that was read (offsets and fixes refer to it). */
+  readonly text: string;
   readonly format: DocumentFormat;
   readonly reading: DocumentReading;
   readonly declarations: readonly Declaration[];
@@ -66,6 +68,7 @@ function extractFile(file: SourceFile, reading: DocumentReading): FileExtraction
   const { claims, declarations } = extractClaims(reading);
   return {
     uri: file.uri,
+    text: file.text,
     format: reading.format,
     reading,
     declarations: declarations.declarations,

@@ -728,7 +728,7 @@ class LatexScanner {
           return false;
         case 'num':
           this.readRawOptional();
-          this.emit(siNumber(this.readRawGroup() ?? ''), p, this.pos);
+          this.siNumberArgument(p);
           return false;
         case 'SIrange':
         case 'qtyrange':
@@ -899,9 +899,27 @@ class LatexScanner {
 
   private siQuantity(p: number): void {
     this.readRawOptional();
-    const num = siNumber(this.readRawGroup() ?? '');
+    const numberEnd = this.siNumberArgument(p);
     const unitText = this.readRawGroup() ?? '';
-    this.emit(`${num} ${siUnit(unitText)}`, p, this.pos);
+    this.emit(` ${siUnit(unitText)}`, numberEnd, this.pos);
+  }
+
+  /**
+   * Reads the number argument of \SI, \qty or \num and writes it. Plain digits are copied
+   * verbatim, so that a fix can rewrite them in place; other forms (1.2e28, 1+-0.1) are
+   * written as read. Returns the source offset just past the argument.
+   */
+  private siNumberArgument(p: number): number {
+    const raw = this.readRawGroup() ?? '';
+    const end = this.pos;
+    const num = siNumber(raw);
+    const trimmed = raw.trim();
+    const contentStart = end - 1 - raw.length;
+    if (num === trimmed && trimmed && !this.frame.span && this.src.slice(contentStart, end - 1) === raw) {
+      const lead = raw.length - raw.trimStart().length;
+      this.emitCopy(contentStart + lead, contentStart + lead + trimmed.length);
+    } else this.emit(num, p, end);
+    return end;
   }
 
   private emitUnit(unitText: string, p: number): void {
