@@ -65,12 +65,12 @@ export function parseRedshiftList(text: string, where: string): number[] {
 }
 
 /** Builds the cosmology from --params text; throws UsageError with every problem, each naming its key. */
-export function cosmologyFromText(text: string): { cosmology: Cosmology; presetName: string | null } {
+export function cosmologyFromText(text: string): { cosmology: Cosmology; presetName: string | null; input: ParameterInput } {
   const parsed = parseParameterText(text);
   if (parsed.problems.length) throw new UsageError(parsed.problems.map((p) => `--params: ${p.message}`).join('\n'));
   const made = createCosmology(parsed.input);
   if (!made.ok) throw new UsageError(made.errors.map((e) => `--params: ${e.parameter}: ${e.message}`).join('\n'));
-  return { cosmology: made.cosmology, presetName: parsed.preset?.name ?? null };
+  return { cosmology: made.cosmology, presetName: parsed.preset?.name ?? null, input: parsed.input };
 }
 
 export function runCalc(argv: string[], io: CliIo): number {

@@ -4,6 +4,12 @@ export interface CliIo {
   readonly stderr: (text: string) => void;
   /** Reads a UTF-8 text file ('-' is standard input); throws an Error with a readable message if it cannot. */
   readonly readFile: (path: string) => string;
+  /** The entries of a folder (null when the path is not a folder). */
+  readonly listFolder?: (path: string) => Array<{ name: string; folder: boolean }> | null;
+  /** Writes a UTF-8 text file; throws an Error with a readable message if it cannot. */
+  readonly writeFile?: (path: string, text: string) => void;
+  /** Whether standard error is a terminal (progress is shown only then). */
+  readonly stderrIsTerminal?: boolean;
 }
 
 /** A usage or input error: printed without a stack trace, exit code 2. */

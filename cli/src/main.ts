@@ -1,6 +1,6 @@
 /** Entry point of the `comove` command: the only place that touches the process and the file system. */
 
-import { readFileSync, readSync } from 'node:fs';
+import { readdirSync, readFileSync, readSync, statSync, writeFileSync } from 'node:fs';
 import { runCli } from './run.js';
 
 /**
@@ -38,8 +38,18 @@ const code = runCli(process.argv.slice(2), {
       return path === '-' ? readStandardInput() : readFileSync(path, 'utf8');
     } catch (e) {
       const err = e as NodeJS.ErrnoException;
-      throw new Error(err.code === 'ENOENT' ? 'no such file' : err.message);
+      throw new Error(err.code === 'ENOENT' ? 'no such file' : err.code === 'EISDIR' ? 'it is a folder' : err.message);
     }
   },
+  listFolder: (path) => {
+    try {
+      if (path === '-' || !statSync(path).isDirectory()) return null;
+      return readdirSync(path, { withFileTypes: true }).map((e) => ({ name: e.name, folder: e.isDirectory() }));
+    } catch {
+      return null;
+    }
+  },
+  writeFile: (path, text) => writeFileSync(path, text, 'utf8'),
+  stderrIsTerminal: process.stderr.isTTY === true,
 });
 process.exitCode = code;

@@ -11,9 +11,8 @@
 import type { Claim } from '../claims/claimExtractor.js';
 import { CosmologyCache, type Cosmology } from '../cosmology/cosmology.js';
 import { PRESETS } from '../cosmology/presets.js';
-import { floorFor } from './checker.js';
 import { questionOf, recompute } from './recompute.js';
-import { DEFAULT_RELATIVE_FLOOR, statedInterval, type Interval } from './tolerance.js';
+import { DEFAULT_RELATIVE_FLOOR, floorFor, statedInterval, type Interval } from './tolerance.js';
 
 export interface SetScore {
   readonly label: string;
@@ -41,10 +40,17 @@ const H0_POWER: Readonly<Record<string, number>> = {
   distanceModulus: 0,
 };
 
-const GRID = {
-  omegaMin: 0.05, omegaMax: 0.6, omegaStep: 0.005,
-  h0Min: 50, h0Max: 90, h0Step: 0.1,
+/**
+ * The search: a coarse grid (Ωm step 0.02, H0 step 1) over the plausible range, then a fine
+ * grid (0.005, 0.1) around the best coarse point. The fine steps are below the precision of
+ * three-digit statements.
+ */
+const SEARCH = {
+  omega: { min: 0.05, max: 0.6, coarse: 0.02, fine: 0.005 },
+  h0: { min: 50, max: 90, coarse: 1, fine: 0.1 },
 };
+/** At most this many claims enter the fit (evenly spaced through the document). */
+export const MAX_FIT_CLAIMS = 400;
 
 function usable(c: Claim): boolean {
   if (c.unchecked || !(c.kind in H0_POWER)) return false;
@@ -94,9 +100,11 @@ function better(a: SetScore, b: SetScore | null): boolean {
  * claims. `declared` is the document's own set, scored the same way for comparison.
  */
 export function fitAuthorCosmology(claims: readonly Claim[], options: { declared?: Cosmology | null; cache?: CosmologyCache; relativeFloor?: number; minimumClaims?: number } = {}): AuthorCosmology | null {
-  const used = claims.filter(usable);
-  if (used.length < (options.minimumClaims ?? 3)) return null;
-  const cache = options.cache ?? new CosmologyCache(8);
+  const all = claims.filter(usable);
+  if (all.length < (options.minimumClaims ?? 3)) return null;
+  const stride = Math.max(1, all.length / MAX_FIT_CLAIMS);
+  const used = all.length <= MAX_FIT_CLAIMS ? all : Array.from({ length: MAX_FIT_CLAIMS }, (_, i) => all[Math.floor(i * stride)]);
+  const cache = options.cache ?? new CosmologyCache(64);
   const floor = options.relativeFloor ?? DEFAULT_RELATIVE_FLOOR;
   const prepared: Prepared[] = used.map((claim) => ({ claim, interval: statedInterval(claim.value), floor: floorFor(claim, floor) }));
   const valuesUnder = (c: Cosmology) => prepared.map((p) => {
@@ -104,28 +112,33 @@ export function fitAuthorCosmology(claims: readonly Claim[], options: { declared
     return r.ok ? r.value : null;
   });
 
-  let best: SetScore | null = null;
-  const nOmega = Math.round((GRID.omegaMax - GRID.omegaMin) / GRID.omegaStep);
-  const nH0 = Math.round((GRID.h0Max - GRID.h0Min) / GRID.h0Step);
-  for (let i = 0; i <= nOmega; i++) {
-    const om = +(GRID.omegaMin + i * GRID.omegaStep).toFixed(4);
-    // Reference values at H0 = 100; other H0 by scaling (no radiation, so exact).
-    const made = cache.get({ H0: 100, Omega_m: om, flat: true });
-    if (!made.ok) continue;
-    const ref = valuesUnder(made.cosmology);
-    const scaled: Array<number | null> = new Array(ref.length);
-    for (let k = 0; k <= nH0; k++) {
-      const h0 = +(GRID.h0Min + k * GRID.h0Step).toFixed(2);
-      const ratio = h0 / 100;
-      for (let j = 0; j < ref.length; j++) {
-        const r = ref[j];
-        const kind = prepared[j].claim.kind;
-        scaled[j] = r === null ? null : kind === 'distanceModulus' ? r - 5 * Math.log10(ratio) : r * ratio ** H0_POWER[kind];
+  const scoreGrid = (omegas: readonly number[], h0s: readonly number[], best: SetScore | null): SetScore | null => {
+    for (const om of omegas) {
+      // Reference values at H0 = 100; other H0 by scaling (no radiation, so exact).
+      const made = cache.get({ H0: 100, Omega_m: om, flat: true });
+      if (!made.ok) continue;
+      const ref = valuesUnder(made.cosmology);
+      const scaled: Array<number | null> = new Array(ref.length);
+      for (const h0 of h0s) {
+        const ratio = h0 / 100;
+        for (let j = 0; j < ref.length; j++) {
+          const r = ref[j];
+          const kind = prepared[j].claim.kind;
+          scaled[j] = r === null ? null : kind === 'distanceModulus' ? r - 5 * Math.log10(ratio) : r * ratio ** H0_POWER[kind];
+        }
+        const s = score(prepared, scaled, `flat ΛCDM, H0 = ${h0}, Ωm = ${om}`, h0, om);
+        if (better(s, best)) best = s;
       }
-      const s = score(prepared, scaled, `flat ΛCDM, H0 = ${h0}, Ωm = ${om}`, h0, om);
-      if (better(s, best)) best = s;
     }
-  }
+    return best;
+  };
+  const steps = (min: number, max: number, step: number) => Array.from({ length: Math.round((max - min) / step) + 1 }, (_, i) => +(min + i * step).toFixed(4));
+  const coarse = scoreGrid(steps(SEARCH.omega.min, SEARCH.omega.max, SEARCH.omega.coarse), steps(SEARCH.h0.min, SEARCH.h0.max, SEARCH.h0.coarse), null)!;
+  const best = scoreGrid(
+    steps(Math.max(SEARCH.omega.min, coarse.Omega_m! - SEARCH.omega.coarse), Math.min(SEARCH.omega.max, coarse.Omega_m! + SEARCH.omega.coarse), SEARCH.omega.fine),
+    steps(Math.max(SEARCH.h0.min, coarse.H0! - SEARCH.h0.coarse), Math.min(SEARCH.h0.max, coarse.H0! + SEARCH.h0.coarse), SEARCH.h0.fine),
+    coarse,
+  );
   const presets: SetScore[] = [];
   for (const preset of PRESETS) {
     const made = cache.get(preset.input);
@@ -134,4 +147,22 @@ export function fitAuthorCosmology(claims: readonly Claim[], options: { declared
   presets.sort((a, b) => (better(a, b) ? -1 : better(b, a) ? 1 : 0));
   const declared = options.declared ? score(prepared, valuesUnder(options.declared), 'declared', options.declared.params.H0, options.declared.params.Omega_m) : null;
   return { best: best!, presets, declared, used };
+}
+
+/**
+ * The document-level sentence about the fit, or null when the declared set already reproduces
+ * the numbers about as well as anything else.
+ */
+export function describeAuthorCosmology(fit: AuthorCosmology, declaredText: string | null): string | null {
+  const { best, declared } = fit;
+  const bestText = `H0 = ${best.H0}, Ωm = ${best.Omega_m} (flat ΛCDM)`;
+  const preset = fit.presets[0];
+  const presetText = preset && preset.agree > 0 && preset.agree >= best.agree - 1 && (!declared || preset.agree > declared.agree)
+    ? `; the ${preset.label} preset reproduces ${preset.agree} of ${preset.of}`
+    : '';
+  if (!declared || declaredText === null) {
+    return `${best.agree} of ${best.of} distance- and time-like numbers agree with ${bestText} to their stated precision${presetText}; the manuscript declares no parameter set`;
+  }
+  if (best.agree - declared.agree < Math.max(2, 0.2 * best.of)) return null;
+  return `${best.agree} of ${best.of} distance- and time-like numbers agree with ${bestText} to their stated precision${presetText}; the manuscript declares ${declaredText} (${declared.agree} of ${declared.of} agree)`;
 }

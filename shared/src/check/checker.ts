@@ -11,12 +11,13 @@ import { findNumbers } from '../claims/numberParser.js';
 import { findRedshifts } from '../claims/redshifts.js';
 import { CosmologyCache, type Cosmology } from '../cosmology/cosmology.js';
 import type { ParameterInput } from '../cosmology/parameters.js';
+import { describeAuthorCosmology, fitAuthorCosmology } from './authorCosmology.js';
 import { compositionSums, declaredDensity, declaredPercentage } from './densities.js';
 import { restate, type SourceEdit } from './fixes.js';
 import { documentChoice, overrideChoice, scopedChoice, type ParameterChoice } from './parameterChoice.js';
 import { questionOf, recompute } from './recompute.js';
 import { diagnose, type Slip } from './slips.js';
-import { DEFAULT_RELATIVE_FLOOR, judge, statedInterval, type Interval } from './tolerance.js';
+import { DEFAULT_RELATIVE_FLOOR, floorFor, judge, statedInterval, type Interval } from './tolerance.js';
 
 export type Verdict = 'consistent' | 'inconsistent' | 'unchecked';
 
@@ -46,7 +47,7 @@ export interface ClaimCheck {
   readonly fixUnavailable: string | null;
 }
 
-export type FindingCode = 'no-declaration' | 'declaration-unusable' | 'declaration-conflict' | 'composition-sum';
+export type FindingCode = 'no-declaration' | 'declaration-unusable' | 'declaration-conflict' | 'composition-sum' | 'author-cosmology';
 
 /** A document-level finding, at reading-text offsets. */
 export interface Finding {
@@ -77,15 +78,8 @@ export interface CheckOptions {
   readonly cache?: CosmologyCache;
   /** Whether to look for slips (default true). */
   readonly diagnose?: boolean;
-}
-
-/** The absolute floor for a value in the claim's unit: relative for most, its magnitude equivalent for moduli. */
-export function floorFor(claim: Claim, relativeFloor: number): (v: number) => number {
-  if (claim.kind === 'distanceModulus') {
-    const mag = 5 * Math.log10(1 + relativeFloor);
-    return () => mag;
-  }
-  return (v) => relativeFloor * Math.abs(v);
+  /** Whether to fit the parameter set the numbers agree with best (default true). */
+  readonly fitAuthorCosmology?: boolean;
 }
 
 function unchecked(claim: Claim, reason: string, parameters: ParameterChoice | null): ClaimCheck {
@@ -181,6 +175,14 @@ export function checkFile(file: FileExtraction, options: CheckOptions = {}): Fil
       related: sum.claims.slice(1).map((c) => ({ start: c.start, end: c.end })),
       message: `the shares of the energy budget in this sentence add up to ${+sum.total.toFixed(6)} %, not 100 % (their rounding admits ${+sum.low.toFixed(3)}–${+sum.high.toFixed(3)} %)`,
     });
+  }
+  if (options.fitAuthorCosmology !== false) {
+    const documentWide = checks.filter((c) => c.status !== 'unchecked' && (c.parameters?.origin === 'declared' || c.parameters?.origin === 'inherited' || c.parameters?.origin === 'override'));
+    const pool = documentSet ? documentWide.map((c) => c.claim) : file.claims;
+    const declared = documentSet ? build(documentSet) : null;
+    const fit = fitAuthorCosmology(pool, { cache, relativeFloor: floor, declared: declared && 'cosmology' in declared ? declared.cosmology : null });
+    const message = fit ? describeAuthorCosmology(fit, documentSet && declared && 'cosmology' in declared ? documentSet.text : null) : null;
+    if (message) findings.push({ code: 'author-cosmology', severity: 'information', message, start: documentSet?.declarations[0]?.start ?? 0, end: documentSet?.declarations[0]?.end ?? 0, related: [] });
   }
   return { extraction: file, parameters: documentSet, checks, findings };
 }

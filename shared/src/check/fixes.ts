@@ -45,15 +45,18 @@ export function formatLike(n: StatedNumber, digits: string, value: number): stri
   return text;
 }
 
-/** The edit that restates `n` as `value`, or a reason it cannot be made. */
-export function restate(doc: DocumentReading, source: string, n: StatedNumber, value: number): SourceEdit | string {
+/**
+ * The edit that restates `n` as `value`, or a reason it cannot be made. With `exact`, the value
+ * is written in full (a declared parameter: H0 = 70 becomes 67.66, not 70).
+ */
+export function restate(doc: DocumentReading, source: string, n: StatedNumber, value: number, exact = false): SourceEdit | string {
   if (n.range || n.uncertainty) return 'a range or a value with an uncertainty is not rewritten';
   const r = doc.reading.sourceRange(n.digitsStart, n.digitsEnd);
   const written = source.slice(r.start, r.end);
   const read = doc.reading.text.slice(n.digitsStart, n.digitsEnd);
   // Only digits copied verbatim from the source can be rewritten in place.
   if (written.replace(/\{,\}|\\,/g, ',') !== read) return 'the number is not written out in the source (it comes from a macro)';
-  const text = formatLike(n, written, value);
+  const text = exact ? (Number.isFinite(value) ? String(+value.toPrecision(12)) : null) : formatLike(n, written, value);
   if (text === null) return 'the value cannot be written in the stated notation';
   return { start: r.start, end: r.end, newText: text };
 }

@@ -8,3 +8,5 @@ export * from './fixes.js';
 export * from './explain.js';
 export * from './authorCosmology.js';
 export * from './migrate.js';
+export * from './findingCodes.js';
+export * from './chartData.js';

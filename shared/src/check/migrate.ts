@@ -99,7 +99,7 @@ export function migrateFile(file: FileExtraction, to: ParameterInput, options: O
           notRewritten.push({ start: st.start, end: st.end, what: st.key, reason: `the new set does not give ${st.key}` });
           continue;
         }
-        const edit = restate(file.reading, file.text, n, v);
+        const edit = restate(file.reading, file.text, n, v, true);
         if (typeof edit === 'string') notRewritten.push({ start: st.start, end: st.end, what: st.key, reason: edit });
         else push(edit, `declared ${st.key}`);
       }
@@ -114,8 +114,14 @@ export function migrateFile(file: FileExtraction, to: ParameterInput, options: O
   after.checks.forEach((check, i) => {
     const c = check.claim;
     const what = `${kindTitle(c.kind)}${c.z !== null ? ` at z = ${c.z}` : ''}`;
-    if (before.checks[i]?.status === 'unchecked' || check.computed === null) {
-      notRewritten.push({ start: c.start, end: c.end, what, reason: check.reason ?? before.checks[i]?.reason ?? 'not checkable' });
+    const was = before.checks[i];
+    if (was?.status === 'unchecked' || check.computed === null) {
+      notRewritten.push({ start: c.start, end: c.end, what, reason: check.reason ?? was?.reason ?? 'not checkable' });
+      return;
+    }
+    // A number that is already wrong is not carried over silently: it is fixed first, by hand or with the quick fix.
+    if (was?.status === 'inconsistent') {
+      notRewritten.push({ start: c.start, end: c.end, what, reason: `it disagrees with the current set already${was.slip ? ` (${was.slip.description})` : ''}` });
       return;
     }
     const edit = restate(file.reading, file.text, c.value, check.computed);

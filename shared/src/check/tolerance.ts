@@ -89,3 +89,13 @@ export function judge(n: StatedNumber, stated: Interval, computed: number, floor
 export function admits(stated: Interval, value: number, floorAbsolute: number): boolean {
   return value >= stated.low - floorAbsolute && value <= stated.high + floorAbsolute;
 }
+
+/** The absolute floor for a value in the claim's unit: relative for most, its magnitude equivalent for moduli. */
+export function floorFor(claim: { readonly kind: string }, relativeFloor: number): (v: number) => number {
+  if (claim.kind === 'distanceModulus') {
+    const mag = 5 * Math.log10(1 + relativeFloor);
+    return () => mag;
+  }
+  return (v) => relativeFloor * Math.abs(v);
+}
+

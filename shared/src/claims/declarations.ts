@@ -69,11 +69,11 @@ const OTHER_MODEL_CUE = /\b(?:simulations?|N-body|mock|lens(?:ing)? model|halo c
 /** Symbols of the parameters as they appear in reading text, mapped to declaration keys. */
 const SYMBOLS: ReadonlyArray<[RegExp, ParameterKey | 'omega_m_lower' | 'omega_b_lower' | 'omega_c_lower']> = [
   [/H_?0(?![\d.])|H₀|H_\{?0\}?|Hubble constant(?: of)?/y, 'H0'],
-  [/Ω_?(?:m|M|mat(?:ter)?)(?:,?0)?(?![A-Za-z])|Ω_?(?:0,?m)(?![A-Za-z])|Ω_?0(?![A-Za-z,])/y, 'Omega_m'],
-  [/Ω_?(?:Λ|λ|L|Lambda|lambda|DE|de|v|vac)(?:,?0)?(?![A-Za-z])/y, 'Omega_Lambda'],
-  [/Ω_?(?:b|B|bar)(?:,?0)?(?![A-Za-z])/y, 'Omega_b'],
-  [/Ω_?(?:c|cdm|CDM|dm|DM)(?:,?0)?(?![A-Za-z])/y, 'Omega_c'],
-  [/Ω_?(?:k|K|curv)(?:,?0)?(?![A-Za-z])/y, 'Omega_k'],
+  [/(?:Ω|Omega)_?(?:m|M|mat(?:ter)?)(?:,?0)?(?![A-Za-z])|(?:Ω|Omega)_?(?:0,?m)(?![A-Za-z])|Ω_?0(?![A-Za-z,])/y, 'Omega_m'],
+  [/(?:Ω|Omega)_?(?:Λ|λ|L|Lambda|lambda|DE|de|v|vac)(?:,?0)?(?![A-Za-z])/y, 'Omega_Lambda'],
+  [/(?:Ω|Omega)_?(?:b|B|bar)(?:,?0)?(?![A-Za-z])/y, 'Omega_b'],
+  [/(?:Ω|Omega)_?(?:c|cdm|CDM|dm|DM)(?:,?0)?(?![A-Za-z])/y, 'Omega_c'],
+  [/(?:Ω|Omega)_?(?:k|K|curv)(?:,?0)?(?![A-Za-z])/y, 'Omega_k'],
   [/ω_?(?:m|M)(?![A-Za-z])/y, 'omega_m_lower'],
   [/ω_?(?:b|B)(?![A-Za-z])/y, 'omega_b_lower'],
   [/ω_?(?:c|cdm|dm)(?![A-Za-z])/y, 'omega_c_lower'],
@@ -159,7 +159,7 @@ export function findDeclarations(doc: DocumentReading, unitCache?: Map<string, U
     const sentence = text.slice(s.start, s.end);
     const cue = DECLARATION_CUE.test(sentence);
     // Only sentences with a parameter symbol, a cue or a named set can declare anything.
-    if (!/[HΩωwTNΣ∑mh]|Planck|WMAP|⟦/.test(sentence)) continue;
+    if (!/[HΩωwTNΣ∑mh]|Omega|Planck|WMAP|⟦/.test(sentence)) continue;
     const statements = parameterStatements(text, s.start, s.end, findNumbers(text, s.start, s.end, unitCache));
     const flat = /\bflat\b|spatially flat|Ω_?k\s*=\s*0(?![.\d])|zero curvature/i.test(sentence);
     const lambdaFromMatter = /Ω_?(?:Λ|λ|L)\S*\s*=\s*1\s*[-−]\s*Ω_?(?:m|M)/.exec(sentence);
@@ -233,7 +233,7 @@ export function parameterStatements(text: string, from: number, to: number, know
   const numberAt = (pos: number) => numbers.find((n) => n.start >= pos && n.start <= pos + 2);
   for (let p = from; p < to; p++) {
     const c = text[p];
-    if (c !== 'H' && c !== 'Ω' && c !== 'ω' && c !== 'w' && c !== 'T' && c !== 'N' && c !== 'Σ' && c !== '∑' && c !== 'm' && c !== 'h' && c !== '(') continue;
+    if (c !== 'H' && c !== 'Ω' && c !== 'O' && c !== 'ω' && c !== 'w' && c !== 'T' && c !== 'N' && c !== 'Σ' && c !== '∑' && c !== 'm' && c !== 'h' && c !== '(') continue;
     if (p > from && /[A-Za-z0-9]/.test(text[p - 1]) && c !== 'Ω' && c !== 'ω') continue;
     if (p > from && text[p - 1] === '/') continue; // cz/H_0: a ratio, not a statement of H0
     if (c === '(') {

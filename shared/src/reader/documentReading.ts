@@ -80,6 +80,8 @@ export interface DocumentReading {
   /** Front matter of a Markdown document (parsed YAML), if any. */
   readonly frontMatter: Readonly<Record<string, unknown>> | null;
   readonly problems: readonly ReaderProblem[];
+  /** True when the file could not be read at all (binary, too large). */
+  readonly unread?: boolean;
 }
 
 /** Marker the readers put in the reading text for a citation: ⟦cite:key1,key2⟧. */
@@ -100,5 +102,6 @@ export function unreadDocument(format: DocumentFormat, message: string): Documen
     texRoot: null,
     frontMatter: null,
     problems: [{ message, sourceStart: 0, sourceEnd: 0, severity: 'error' }],
+    unread: true,
   };
 }
