@@ -12,9 +12,9 @@ function esc(s: string): string {
   return s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;');
 }
 
-const W = 640;
+const W = 720;
 const H = 360;
-const M = { left: 70, right: 160, top: 30, bottom: 45 };
+const M = { left: 70, right: 230, top: 30, bottom: 45 };
 const COLOURS = ['#1f5fa8', '#b35806', '#1b7837', '#762a83', '#8c510a'];
 
 function ticks(low: number, high: number, n: number): number[] {
@@ -31,7 +31,9 @@ export function chartSvg(chart: Chart, id: string): string {
   let yLow = chart.logarithmic ? Math.log10(Math.min(...all)) : 0;
   let yHigh = chart.logarithmic ? Math.log10(Math.max(...all)) : Math.max(...all) * 1.05;
   if (chart.logarithmic) {
-    yLow = Math.floor(yLow);
+    // From a decade below the lowest stated or computed point: the curves start at z → 0.
+    const pointValues = chart.points.flatMap((p) => [p.stated, p.computed]).filter((v) => v > 0);
+    yLow = Math.max(Math.floor(yLow), Math.floor(Math.log10(Math.min(...pointValues))) - 1);
     yHigh = Math.ceil(yHigh);
   }
   const px = (z: number) => M.left + ((W - M.left - M.right) * z) / chart.zMax;
@@ -46,13 +48,14 @@ export function chartSvg(chart: Chart, id: string): string {
     parts.push(`<line x1="${px(z)}" y1="${M.top}" x2="${px(z)}" y2="${H - M.bottom}" class="grid"/><text x="${px(z)}" y="${H - M.bottom + 16}" text-anchor="middle" class="tick">${z}</text>`);
   }
   const yTicks = chart.logarithmic ? Array.from({ length: yHigh - yLow + 1 }, (_, i) => 10 ** (yLow + i)) : ticks(0, yHigh, 6);
-  for (const v of yTicks) parts.push(`<line x1="${M.left}" y1="${py(v)}" x2="${W - M.right}" y2="${py(v)}" class="grid"/><text x="${M.left - 6}" y="${py(v) + 4}" text-anchor="end" class="tick">${significant(v, 3)}</text>`);
+  for (const v of yTicks) parts.push(`<line x1="${M.left}" y1="${py(v)}" x2="${W - M.right}" y2="${py(v)}" class="grid"/><text x="${M.left - 6}" y="${py(v) + 4}" text-anchor="end" class="tick">${+v.toPrecision(6)}</text>`);
   parts.push(`<line x1="${M.left}" y1="${H - M.bottom}" x2="${W - M.right}" y2="${H - M.bottom}" class="axis"/><line x1="${M.left}" y1="${M.top}" x2="${M.left}" y2="${H - M.bottom}" class="axis"/>`);
   parts.push(`<text x="${(M.left + W - M.right) / 2}" y="${H - 8}" text-anchor="middle" class="label">redshift z</text>`);
+  parts.push(`<clipPath id="${id}-area"><rect x="${M.left}" y="${M.top}" width="${W - M.left - M.right}" height="${H - M.top - M.bottom}"/></clipPath>`);
   chart.series.forEach((s, i) => {
     const colour = COLOURS[i % COLOURS.length];
     const d = s.points.filter((p) => Number.isFinite(p[1])).map((p, k) => `${k ? 'L' : 'M'}${px(p[0]).toFixed(1)},${py(p[1]).toFixed(1)}`).join('');
-    parts.push(`<path d="${d}" class="curve" data-kind="${s.kind}" stroke="${colour}"/>`);
+    parts.push(`<path d="${d}" class="curve" data-kind="${s.kind}" stroke="${colour}" clip-path="url(#${id}-area)"/>`);
     parts.push(`<line x1="${W - M.right + 12}" y1="${M.top + 14 + 18 * i}" x2="${W - M.right + 30}" y2="${M.top + 14 + 18 * i}" stroke="${colour}" stroke-width="2"/><text x="${W - M.right + 34}" y="${M.top + 18 + 18 * i}" class="legend">${esc(s.label)}</text>`);
   });
   for (const p of chart.points) {

@@ -49,7 +49,9 @@ export function significant(value: number, digits: number): string {
   const d = Math.min(15, Math.max(1, digits));
   const a = Math.abs(value);
   if (a !== 0 && (a >= 1e7 || a < 1e-4)) return value.toExponential(d - 1).replace('e+', 'e');
-  return String(Number(value.toPrecision(d)));
+  // Trailing zeros are digits too (11.00 Gyr), unless toPrecision would switch to an exponent (12000).
+  const s = value.toPrecision(d);
+  return s.includes('e') ? String(Number(s)) : s;
 }
 
 function withUnit(v: string, unit: string): string {
