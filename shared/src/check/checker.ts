@@ -11,12 +11,13 @@ import { findNumbers } from '../claims/numberParser.js';
 import { findRedshifts } from '../claims/redshifts.js';
 import { CosmologyCache, type Cosmology } from '../cosmology/cosmology.js';
 import type { ParameterInput } from '../cosmology/parameters.js';
+import type { Unit } from '../cosmology/units.js';
 import { describeAuthorCosmology, fitAuthorCosmology } from './authorCosmology.js';
 import { compositionSums, declaredDensity, declaredPercentage } from './densities.js';
 import { restate, type SourceEdit } from './fixes.js';
 import { documentChoice, overrideChoice, scopedChoice, type ParameterChoice } from './parameterChoice.js';
 import { questionOf, recompute } from './recompute.js';
-import { diagnose, type Slip } from './slips.js';
+import { diagnose, presetSets, type Slip } from './slips.js';
 import { DEFAULT_RELATIVE_FLOOR, floorFor, judge, statedInterval, type Interval } from './tolerance.js';
 
 export type Verdict = 'consistent' | 'inconsistent' | 'unchecked';
@@ -132,16 +133,19 @@ export function checkFile(file: FileExtraction, options: CheckOptions = {}): Fil
   }
 
   const sentenceRedshifts = new Map<number, number[]>();
+  const units = new Map<string, Unit | null>();
   const neighbours = (claim: Claim): number[] => {
     let zs = sentenceRedshifts.get(claim.sentenceStart);
     if (!zs) {
-      const numbers = findNumbers(text, claim.sentenceStart, claim.sentenceEnd);
+      const numbers = findNumbers(text, claim.sentenceStart, claim.sentenceEnd, units);
       zs = [...new Set(findRedshifts(text, claim.sentenceStart, claim.sentenceEnd, numbers).flatMap((m) => (m.range ? [] : [m.value, ...m.list])))];
       sentenceRedshifts.set(claim.sentenceStart, zs);
     }
     return zs;
   };
 
+  let presets: ReturnType<typeof presetSets> | null = null;
+  const slipSearch = { presets: () => (presets ??= presetSets(cache)), neighbours };
   const checks: ClaimCheck[] = [];
   for (const claim of file.claims) {
     const scoped = options.override ? null : withLine(scopedChoice(file.declarations, claim.start, file.uri));
@@ -159,7 +163,7 @@ export function checkFile(file: FileExtraction, options: CheckOptions = {}): Fil
       checks.push(unchecked(claim, b.error, choice));
       continue;
     }
-    checks.push(checkClaim(claim, b.cosmology, choice, file, floor, options.diagnose !== false, cache, neighbours));
+    checks.push(checkClaim(claim, b.cosmology, choice, file, floor, options.diagnose !== false, slipSearch));
   }
 
   if (!documentSet && file.claims.some((c) => !c.unchecked)) {
@@ -201,8 +205,8 @@ export function checkProject(files: readonly FileExtraction[], options: CheckOpt
 }
 
 function checkClaim(
-  claim: Claim, c: Cosmology, choice: ParameterChoice, file: FileExtraction, relativeFloor: number, withDiagnosis: boolean, cache: CosmologyCache,
-  neighbours: (c: Claim) => number[],
+  claim: Claim, c: Cosmology, choice: ParameterChoice, file: FileExtraction, relativeFloor: number, withDiagnosis: boolean,
+  slipSearch: { presets: () => ReturnType<typeof presetSets>; neighbours: (c: Claim) => number[] },
 ): ClaimCheck {
   const n = claim.value;
   const unitText = n.unit?.text.trim() ?? '';
@@ -236,7 +240,7 @@ function checkClaim(
   let fixUnavailable: string | null = null;
   if (!j.consistent) {
     if (withDiagnosis && claim.kind !== 'densityParameter' && claim.kind !== 'compositionPercentage') {
-      slip = diagnose({ cosmology: c, question: questionOf(claim), stated: n, interval, computed, floor: floorOf, neighbouringRedshifts: neighbours(claim), cache });
+      slip = diagnose({ cosmology: c, question: questionOf(claim), stated: n, interval, computed, floor: floorOf, neighbouringRedshifts: slipSearch.neighbours(claim), presets: slipSearch.presets() });
     }
     const edit = restate(file.reading, file.text, n, computed);
     if (typeof edit === 'string') fixUnavailable = edit;

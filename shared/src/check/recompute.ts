@@ -106,14 +106,25 @@ function fromEpoch(e: EpochValue, q: ClaimQuestion, c: Cosmology, methodRelative
   return fromBase(e.value, e.unit, q, c, e.method, e.source, { methodRelative, accuracy: e.accuracy, note: e.note ?? null });
 }
 
-/** Recomputes one claim under cosmology c. Never throws on user input. */
+/**
+ * Recomputes one claim under cosmology c. Never throws on user input. Results are kept per
+ * parameter set (a manuscript states the same quantity at the same redshift many times, and the
+ * slip search and the fit ask again).
+ */
 export function recompute(c: Cosmology, q: ClaimQuestion): Recomputation {
-  try {
-    return recomputeUnchecked(c, q);
-  } catch (e) {
-    if (e instanceof CosmologyRangeError) return { ok: false, reason: e.message };
-    throw e;
+  const memo = c.memo('recompute', () => new Map<string, Recomputation>());
+  const key = `${q.kind}|${q.z}|${q.zRange}|${q.angleArcsec}|${q.sinceEpoch}|${q.parameter}|${q.unit ? q.unit.text : ''}`;
+  let r = memo.get(key);
+  if (!r) {
+    try {
+      r = recomputeUnchecked(c, q);
+    } catch (e) {
+      if (!(e instanceof CosmologyRangeError)) throw e;
+      r = { ok: false, reason: e.message };
+    }
+    if (memo.size < 100_000) memo.set(key, r);
   }
+  return r;
 }
 
 function needZ(q: ClaimQuestion): number | string {

@@ -10,7 +10,7 @@
 import type { ClaimKind } from '../claims/claimKinds.js';
 import type { StatedNumber } from '../claims/numberParser.js';
 import type { Cosmology, CosmologyCache } from '../cosmology/cosmology.js';
-import { PRESETS } from '../cosmology/presets.js';
+import { PRESETS, type Preset } from '../cosmology/presets.js';
 import { recompute, type ClaimQuestion } from './recompute.js';
 import { admits, type Interval } from './tolerance.js';
 
@@ -80,7 +80,18 @@ export interface SlipContext {
   readonly floor: (v: number) => number;
   /** Other redshifts named in the claim's sentence. */
   readonly neighbouringRedshifts: readonly number[];
-  readonly cache: CosmologyCache;
+  /** The published sets to try, built once per document (presetSets). */
+  readonly presets: ReadonlyArray<{ readonly preset: Preset; readonly cosmology: Cosmology }>;
+}
+
+/** The presets, built (through the caller's cache) for the slip search. */
+export function presetSets(cache: CosmologyCache): Array<{ preset: Preset; cosmology: Cosmology }> {
+  const out: Array<{ preset: Preset; cosmology: Cosmology }> = [];
+  for (const preset of PRESETS) {
+    const made = cache.get(preset.input);
+    if (made.ok) out.push({ preset, cosmology: made.cosmology });
+  }
+  return out;
 }
 
 /** The slip that reproduces the stated value, or null. Tried in order; the first that fits wins. */
@@ -143,10 +154,9 @@ export function diagnose(ctx: SlipContext): Slip | null {
     }
   }
 
-  for (const preset of PRESETS) {
-    const made = ctx.cache.get(preset.input);
-    if (!made.ok || sameSet(made.cosmology, c)) continue;
-    const v = valueOf(q, made.cosmology);
+  for (const { preset, cosmology } of ctx.presets) {
+    if (sameSet(cosmology, c)) continue;
+    const v = valueOf(q, cosmology);
     if (v !== null && fits(v)) {
       return { id: 'other-parameter-set', description: `the stated value is what the ${preset.title} parameter set (${preset.name}) gives, not the declared set`, value: v, detail: preset.name };
     }

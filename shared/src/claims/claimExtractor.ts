@@ -88,7 +88,16 @@ function dimensionsMatch(want: Partial<Record<string, number>> | null, got: Reco
 /** Extracts the claims of a document. Never throws. */
 export function extractClaims(doc: DocumentReading): ClaimScan {
   const units = new Map<string, Unit | null>();
-  const declarations = findDeclarations(doc, units);
+  // Numbers of a span, parsed once: declarations, claims and table rows all ask for them.
+  const parsed = new Map<number, { to: number; numbers: StatedNumber[] }>();
+  const numbersIn = (from: number, to: number): StatedNumber[] => {
+    const hit = parsed.get(from);
+    if (hit && hit.to === to) return hit.numbers;
+    const numbers = findNumbers(doc.reading.text, from, to, units);
+    parsed.set(from, { to, numbers });
+    return numbers;
+  };
+  const declarations = findDeclarations(doc, units, numbersIn);
   const text = doc.reading.text;
   const claims: Claim[] = [];
   const skips = [...declarations.skips].sort((a, b) => a.start - b.start);
@@ -107,7 +116,7 @@ export function extractClaims(doc: DocumentReading): ClaimScan {
     const block = doc.blocks[blockIndex];
     if (context && context.block !== block) context = null;
     if (block && block.kind === 'table-cell') continue; // table cells are read by the table pass
-    const numbers = findNumbers(text, sentence.start, sentence.end, units);
+    const numbers = numbersIn(sentence.start, sentence.end);
     const mentions = findRedshifts(text, sentence.start, sentence.end, numbers);
     const redshiftNumbers = new Set<number>([...mentions.map((m) => m.numberStart), ...mentions.flatMap((m) => m.listNumberStarts)]);
     const statementRanges = parameterStatements(text, sentence.start, sentence.end, numbers);
@@ -342,7 +351,7 @@ export function extractClaims(doc: DocumentReading): ClaimScan {
     else if (distinctHere.length > 1 || flat.some((m) => m.range)) context = null;
   }
 
-  claims.push(...tableClaims(doc, inSkip, units));
+  claims.push(...tableClaims(doc, inSkip, units, numbersIn));
   claims.sort((a, b) => a.start - b.start);
   return { claims, declarations };
 }
@@ -375,7 +384,7 @@ function pureNumberKind(near: string, n: StatedNumber): { kind: ClaimKind; dista
 }
 
 /** Claims in table cells: the kind from the column header, the redshift from the row's z column. */
-function tableClaims(doc: DocumentReading, inSkip: (pos: number) => boolean, units: Map<string, Unit | null>): Claim[] {
+function tableClaims(doc: DocumentReading, inSkip: (pos: number) => boolean, units: Map<string, Unit | null>, numbersIn: (from: number, to: number) => StatedNumber[]): Claim[] {
   const text = doc.reading.text;
   const cells = doc.blocks.filter((b) => b.kind === 'table-cell' && b.cell);
   const out: Claim[] = [];
@@ -399,12 +408,14 @@ function tableClaims(doc: DocumentReading, inSkip: (pos: number) => boolean, uni
       captionRedshift.set(id, mentions.length === 1 && !mentions[0].range && mentions[0].list.length === 0 ? mentions[0].value : null);
     } else lastCaption = null;
   }
+  const kindOfHeader = new Map<string, ClaimKind | null>();
   for (const c of cells) {
     const header = c.cell!.header;
     if (!header || inSkip(c.start)) continue;
-    const headerKind = kindFromHeader(header);
+    let headerKind = kindOfHeader.get(header);
+    if (headerKind === undefined) kindOfHeader.set(header, (headerKind = kindFromHeader(header)));
     if (!headerKind) continue;
-    const numbers = findNumbers(text, c.start, c.end, units);
+    const numbers = numbersIn(c.start, c.end);
     if (numbers.length !== 1) continue;
     const n = numbers[0];
     const unitText = /\(([^)]+)\)|\[([^\]]+)\]/.exec(header);
@@ -412,7 +423,7 @@ function tableClaims(doc: DocumentReading, inSkip: (pos: number) => boolean, uni
     const value: StatedNumber = unit && !n.unit ? { ...n, unit: { ...unit, start: c.start, end: c.start } } : n;
     const row = byRow.get(`${c.cell!.table}:${c.cell!.row}`) ?? [];
     const zCell = row.find((r) => r !== c && /^(?:z|z_\w+|redshift)\b/i.test((r.cell!.header ?? '').trim()));
-    const zNumbers = zCell ? findNumbers(text, zCell.start, zCell.end, units) : [];
+    const zNumbers = zCell ? numbersIn(zCell.start, zCell.end) : [];
     const fromCaption = zCell ? null : captionRedshift.get(c.cell!.table) ?? null;
     const z = zNumbers.length === 1 ? zNumbers[0].value : fromCaption;
     out.push({

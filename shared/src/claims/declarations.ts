@@ -105,7 +105,11 @@ interface Statement {
 }
 
 /** Scans a document for declarations, skip regions and declaration problems. Never throws. */
-export function findDeclarations(doc: DocumentReading, unitCache?: Map<string, Unit | null>): DeclarationScan {
+export function findDeclarations(
+  doc: DocumentReading,
+  unitCache?: Map<string, Unit | null>,
+  numbersIn: (from: number, to: number) => StatedNumber[] = (from, to) => findNumbers(doc.reading.text, from, to, unitCache),
+): DeclarationScan {
   const text = doc.reading.text;
   const declarations: Declaration[] = [];
   const problems: DeclarationProblem[] = [];
@@ -160,7 +164,7 @@ export function findDeclarations(doc: DocumentReading, unitCache?: Map<string, U
     const cue = DECLARATION_CUE.test(sentence);
     // Only sentences with a parameter symbol, a cue or a named set can declare anything.
     if (!/[HΩωwTNΣ∑mh]|Omega|Planck|WMAP|⟦/.test(sentence)) continue;
-    const statements = parameterStatements(text, s.start, s.end, findNumbers(text, s.start, s.end, unitCache));
+    const statements = parameterStatements(text, s.start, s.end, numbersIn(s.start, s.end));
     const flat = /\bflat\b|spatially flat|Ω_?k\s*=\s*0(?![.\d])|zero curvature/i.test(sentence);
     const lambdaFromMatter = /Ω_?(?:Λ|λ|L)\S*\s*=\s*1\s*[-−]\s*Ω_?(?:m|M)/.exec(sentence);
     const named = namedSet(sentence);
