@@ -81,7 +81,7 @@ export function explain(check: ClaimCheck, declaredAt: (uri: string, line: numbe
   const n = c.value;
   const unit = check.unitText;
   const lines: string[] = [`**${kindTitle(c.kind)}**${whereText(check)} — **${check.status}**`, ''];
-  lines.push(`- Stated: ${withUnit(n.text, unit)}${check.interval ? ` (admits ${intervalText(check.interval.low, check.interval.high, unit, n.significantDigits + 2)})` : ''}`);
+  lines.push(`- Stated: ${withUnit(n.text, unit)}${check.interval ? ` (admits ${intervalText(check.interval.low, check.interval.high, unit, n.significantDigits + 1)})` : ''}`);
   if (check.status === 'unchecked') {
     lines.push(`- Not checked: ${check.reason}`);
   } else if (check.computed !== null) {

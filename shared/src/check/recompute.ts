@@ -12,7 +12,7 @@ import type { Cosmology } from '../cosmology/cosmology.js';
 import { comovingVolumeBetween } from '../cosmology/distances.js';
 import { ACCURACY, epochs, type EpochValue } from '../cosmology/epochs.js';
 import { CosmologyRangeError } from '../cosmology/errors.js';
-import { findQuantity, RedshiftPoint } from '../cosmology/quantities.js';
+import { findQuantity, QUANTITIES, RedshiftPoint } from '../cosmology/quantities.js';
 import { convert, parseUnit, sameDimension, type Unit } from '../cosmology/units.js';
 import { SQUARE_DEGREE_SR } from '../cosmology/constants.js';
 
@@ -57,15 +57,19 @@ export function questionOf(c: Claim): ClaimQuestion {
   return { kind: c.kind, z: c.z, zRange: c.zRange, angleArcsec: c.angleArcsec, sinceEpoch: c.sinceEpoch, parameter: c.parameter, unit: c.value.unit?.unit ?? null };
 }
 
-const UNIT_CACHE = new Map<string, Unit>();
+/** Every unit a recomputed value comes in, parsed once at load (a constant table). */
+const BASE_UNITS: ReadonlyMap<string, Unit> = new Map(
+  [...new Set(['Mpc', 'Gyr', 'kyr', 'kpc', 'kpc/arcsec', 'Mpc^3', 'Mpc^3 deg^-2', ...QUANTITIES.map((q) => q.unit)])]
+    .filter((text) => text !== '')
+    .map((text) => {
+      const parsed = parseUnit(text);
+      if (!parsed.ok) throw new Error(`internal: unit ${text}`);
+      return [text, parsed.unit] as const;
+    }),
+);
 function unitOf(text: string): Unit {
-  let u = UNIT_CACHE.get(text);
-  if (!u) {
-    const parsed = parseUnit(text);
-    if (!parsed.ok) throw new Error(`internal: unit ${text}`);
-    u = parsed.unit;
-    UNIT_CACHE.set(text, u);
-  }
+  const u = BASE_UNITS.get(text);
+  if (!u) throw new Error(`internal: unit ${text} is not in the table`);
   return u;
 }
 
