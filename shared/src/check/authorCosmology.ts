@@ -50,7 +50,7 @@ const SEARCH = {
   h0: { min: 50, max: 90, coarse: 1, fine: 0.1 },
 };
 /** At most this many claims enter the fit (evenly spaced through the document). */
-export const MAX_FIT_CLAIMS = 400;
+export const MAX_FIT_CLAIMS = 200;
 
 function usable(c: Claim): boolean {
   if (c.unchecked || !(c.kind in H0_POWER)) return false;
@@ -80,14 +80,14 @@ function score(prepared: readonly Prepared[], values: ReadonlyArray<number | nul
   let agree = 0;
   let of = 0;
   let sum = 0;
-  prepared.forEach((p, i) => {
+  for (let i = 0; i < prepared.length; i++) {
     const v = values[i];
-    if (v === null) return;
+    if (v === null) continue;
     of++;
-    const m = misfit(p, v);
+    const m = misfit(prepared[i], v);
     if (m === 0) agree++;
     sum += Math.min(m, 1e4);
-  });
+  }
   return { label, H0, Omega_m, agree, of, misfit: sum };
 }
 
@@ -126,8 +126,8 @@ export function fitAuthorCosmology(claims: readonly Claim[], options: { declared
           const kind = prepared[j].claim.kind;
           scaled[j] = r === null ? null : kind === 'distanceModulus' ? r - 5 * Math.log10(ratio) : r * ratio ** H0_POWER[kind];
         }
-        const s = score(prepared, scaled, `flat ΛCDM, H0 = ${h0}, Ωm = ${om}`, h0, om);
-        if (better(s, best)) best = s;
+        const s = score(prepared, scaled, '', h0, om);
+        if (better(s, best)) best = { ...s, label: `flat ΛCDM, H0 = ${h0}, Ωm = ${om}` };
       }
     }
     return best;

@@ -7,11 +7,8 @@
 
 import type { Claim } from '../claims/claimExtractor.js';
 import { lineColumn, lineStartsOf, type FileExtraction } from '../claims/extraction.js';
-import { findNumbers } from '../claims/numberParser.js';
-import { findRedshifts } from '../claims/redshifts.js';
 import { CosmologyCache, type Cosmology } from '../cosmology/cosmology.js';
 import type { ParameterInput } from '../cosmology/parameters.js';
-import type { Unit } from '../cosmology/units.js';
 import { describeAuthorCosmology, fitAuthorCosmology } from './authorCosmology.js';
 import { compositionSums, declaredDensity, declaredPercentage } from './densities.js';
 import { restate, type SourceEdit } from './fixes.js';
@@ -132,20 +129,8 @@ export function checkFile(file: FileExtraction, options: CheckOptions = {}): Fil
     findings.push({ code: 'declaration-conflict', severity: 'warning', message: p.message, start: p.ranges[0]?.start ?? 0, end: p.ranges[0]?.end ?? 0, related: p.ranges.slice(1) });
   }
 
-  const sentenceRedshifts = new Map<number, number[]>();
-  const units = new Map<string, Unit | null>();
-  const neighbours = (claim: Claim): number[] => {
-    let zs = sentenceRedshifts.get(claim.sentenceStart);
-    if (!zs) {
-      const numbers = findNumbers(text, claim.sentenceStart, claim.sentenceEnd, units);
-      zs = [...new Set(findRedshifts(text, claim.sentenceStart, claim.sentenceEnd, numbers).flatMap((m) => (m.range ? [] : [m.value, ...m.list])))];
-      sentenceRedshifts.set(claim.sentenceStart, zs);
-    }
-    return zs;
-  };
-
   let presets: ReturnType<typeof presetSets> | null = null;
-  const slipSearch = { presets: () => (presets ??= presetSets(cache)), neighbours };
+  const slipSearch = { presets: () => (presets ??= presetSets(cache)) };
   const checks: ClaimCheck[] = [];
   for (const claim of file.claims) {
     const scoped = options.override ? null : withLine(scopedChoice(file.declarations, claim.start, file.uri));
@@ -206,7 +191,7 @@ export function checkProject(files: readonly FileExtraction[], options: CheckOpt
 
 function checkClaim(
   claim: Claim, c: Cosmology, choice: ParameterChoice, file: FileExtraction, relativeFloor: number, withDiagnosis: boolean,
-  slipSearch: { presets: () => ReturnType<typeof presetSets>; neighbours: (c: Claim) => number[] },
+  slipSearch: { presets: () => ReturnType<typeof presetSets> },
 ): ClaimCheck {
   const n = claim.value;
   const unitText = n.unit?.text.trim() ?? '';
@@ -240,7 +225,7 @@ function checkClaim(
   let fixUnavailable: string | null = null;
   if (!j.consistent) {
     if (withDiagnosis && claim.kind !== 'densityParameter' && claim.kind !== 'compositionPercentage') {
-      slip = diagnose({ cosmology: c, question: questionOf(claim), stated: n, interval, computed, floor: floorOf, neighbouringRedshifts: slipSearch.neighbours(claim), presets: slipSearch.presets() });
+      slip = diagnose({ cosmology: c, question: questionOf(claim), stated: n, interval, computed, floor: floorOf, neighbouringRedshifts: claim.sentenceRedshifts, presets: slipSearch.presets() });
     }
     const edit = restate(file.reading, file.text, n, computed);
     if (typeof edit === 'string') fixUnavailable = edit;

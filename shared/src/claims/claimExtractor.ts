@@ -36,6 +36,8 @@ export interface Claim {
   readonly end: number;
   readonly sentenceStart: number;
   readonly sentenceEnd: number;
+  /** Every single redshift named in the claim's sentence (for the checker's neighbouring-redshift slip). */
+  readonly sentenceRedshifts: readonly number[];
   /** 0–1: how sure the extraction is of the kind and binding. */
   readonly confidence: number;
   /** Why the claim cannot be checked as it stands, or null. */
@@ -123,7 +125,7 @@ export function extractClaims(doc: DocumentReading): ClaimScan {
     const sentenceText = text.slice(sentence.start, sentence.end);
     const measured = MEASURED.test(sentenceText) && !/\badopt|\bassum/i.test(sentenceText);
 
-    const found: Array<Omit<Claim, 'z' | 'zRange' | 'zSource' | 'unchecked' | 'confidence'> & { cueDistance: number }> = [];
+    const found: Array<Omit<Claim, 'z' | 'zRange' | 'zSource' | 'unchecked' | 'confidence' | 'sentenceRedshifts'> & { cueDistance: number }> = [];
     /** Records a claim on number n, ending at `end` (the unit's end, or the number's). */
     const add = (kind: ClaimKind, n: StatedNumber, end: number, cueDistance = 0, extra: { angleArcsec?: number; parameter?: string; sinceEpoch?: 'recombination' | null } = {}) =>
       found.push({
@@ -272,6 +274,7 @@ export function extractClaims(doc: DocumentReading): ClaimScan {
     const sameKind = needing.length > 1 && needing.every((f) => f.kind === needing[0].kind);
     const respectively = flat.length > 1 && flat.length === needing.length && (/respectively|\beach\b/i.test(sentenceText) || sameKind);
     // Epochs stated as redshifts in this sentence ("recombination at z_* ≈ 1090, when the universe was 372,000 years old").
+    const sentenceRedshifts = [...new Set(flat.filter((m) => !m.range).map((m) => m.value))];
     const epochRedshifts = found.filter((f) => f.kind === 'recombination' || f.kind === 'matterRadiationEquality' || f.kind === 'dragEpoch' || f.kind === 'accelerationOnset');
     for (const f of found) {
       let z: number | null = null;
@@ -340,7 +343,7 @@ export function extractClaims(doc: DocumentReading): ClaimScan {
         }
       }
       if (f.value.qualifier === 'upper-bound' || f.value.qualifier === 'lower-bound') confidence -= 0.1;
-      claims.push({ ...withoutCue(f), z, zRange, zSource, confidence: Math.max(0.1, Math.min(1, confidence)), unchecked });
+      claims.push({ ...withoutCue(f), z, zRange, zSource, sentenceRedshifts, confidence: Math.max(0.1, Math.min(1, confidence)), unchecked });
     }
     previous = { sentence, mentions };
     const distinctHere = [...new Set(flat.filter((m) => !m.range).map((m) => m.value))];
@@ -439,6 +442,7 @@ function tableClaims(doc: DocumentReading, inSkip: (pos: number) => boolean, uni
       end: n.end,
       sentenceStart: c.start,
       sentenceEnd: c.end,
+      sentenceRedshifts: [],
       confidence: z === null ? 0.4 : 0.85,
       unchecked: z === null && NEEDS_REDSHIFT.has(headerKind) ? 'the table row has no redshift column' : unit?.unit ? null : 'the column header gives no unit Comove knows',
     });

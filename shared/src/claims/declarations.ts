@@ -164,10 +164,13 @@ export function findDeclarations(
     const cue = DECLARATION_CUE.test(sentence);
     // Only sentences with a parameter symbol, a cue or a named set can declare anything.
     if (!/[HΩωwTNΣ∑mh]|Omega|Planck|WMAP|⟦/.test(sentence)) continue;
+    const named = namedSet(sentence);
+    // Without a cue or a named set, only a sentence with two parameter statements declares
+    // anything, and that takes two parameter symbols: most sentences stop here, unparsed.
+    if (!cue && !named && countSymbols(sentence) < 2) continue;
     const statements = parameterStatements(text, s.start, s.end, numbersIn(s.start, s.end));
     const flat = /\bflat\b|spatially flat|Ω_?k\s*=\s*0(?![.\d])|zero curvature/i.test(sentence);
     const lambdaFromMatter = /Ω_?(?:Λ|λ|L)\S*\s*=\s*1\s*[-−]\s*Ω_?(?:m|M)/.exec(sentence);
-    const named = namedSet(sentence);
     const injected = sentence.includes(INJECTED_VALUE) && /H_?0|Ω|h\s*=/.test(sentence);
     if (!cue && statements.length < 2 && !named) continue;
     if (MEASUREMENT_CUE.test(sentence) && !/\b(?:adopt|assum)/i.test(sentence)) continue;
@@ -228,6 +231,15 @@ export function findDeclarations(
     }
   }
   return { declarations, skips, problems };
+}
+
+/** A loose count of parameter symbols in a sentence (never fewer than parameterStatements can find). */
+const ANY_SYMBOL = /H_?0|H₀|H_\{|Hubble constant|Ω|Omega|ω|(?<![A-Za-z])h(?![A-Za-z])|w_?[0a]|w_\{|T_?(?:CMB|cmb|0)|N_?(?:eff|ν)|m_?ν/g;
+function countSymbols(sentence: string): number {
+  let n = 0;
+  ANY_SYMBOL.lastIndex = 0;
+  while (ANY_SYMBOL.exec(sentence) && ++n < 2);
+  return n;
 }
 
 /** Parameter statements (symbol, relation, number) in text[from, to), including tuples. */
