@@ -70,6 +70,8 @@ describe('binding to a redshift', () => {
   it('binds table cells to the redshift in the table’s caption when the table has no z column', () => {
     const c = claimsOf('\\begin{table}\\caption{Distances of the pair at $z = 1.27$.}\\begin{tabular}{lc} Model & $D_A$ (Gpc) \\\\ round & 1.72 \\\\ \\end{tabular}\\end{table}');
     expect(c[0]).toMatchObject({ kind: 'angularDiameterDistance', text: '1.72', z: 1.27, zSource: 'caption' });
+    const below = claimsOf('\\begin{table}\\begin{tabular}{lc} Model & $D_A$ (Gpc) \\\\ round & 1.72 \\\\ \\end{tabular}\\caption{Distances of the pair at $z = 1.27$.}\\end{table}');
+    expect(below[0]).toMatchObject({ kind: 'angularDiameterDistance', text: '1.72', z: 1.27, zSource: 'caption' });
   });
   it('binds volumes to a range of redshift', () => {
     const c = claimsOf('The comoving volume between $z = 2$ and $z = 3$ is 120\\,Gpc$^3$, and within $1 < z < 2$ it is 430\\,Gpc$^3$.');

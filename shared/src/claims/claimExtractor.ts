@@ -399,17 +399,29 @@ function tableClaims(doc: DocumentReading, inSkip: (pos: number) => boolean, uni
     else byRow.set(key, [c]);
   }
   // A table's caption may give the redshift of all its rows ("Distances at z = 0.5"): the
-  // caption read just before the table's first cell, with nothing in between.
+  // caption read just before the table's first cell, or — for a caption set below the table —
+  // just after its last cell, with nothing in between.
   const captionRedshift = new Map<number, number | null>();
+  const redshiftOf = (caption: (typeof doc.blocks)[number]) => {
+    const mentions = findRedshifts(text, caption.start, caption.end);
+    return mentions.length === 1 && !mentions[0].range && mentions[0].list.length === 0 ? mentions[0].value : null;
+  };
   let lastCaption: (typeof doc.blocks)[number] | null = null;
+  let lastTable: number | null = null;
   for (const b of doc.blocks) {
-    if (b.kind === 'caption') lastCaption = b;
-    else if (b.kind === 'table-cell') {
+    if (b.kind === 'caption') {
+      if (lastTable !== null && (captionRedshift.get(lastTable) ?? null) === null) captionRedshift.set(lastTable, redshiftOf(b));
+      lastCaption = b;
+      lastTable = null;
+    } else if (b.kind === 'table-cell') {
       const id = b.cell!.table;
+      lastTable = id;
       if (captionRedshift.has(id)) continue;
-      const mentions = lastCaption ? findRedshifts(text, lastCaption.start, lastCaption.end) : [];
-      captionRedshift.set(id, mentions.length === 1 && !mentions[0].range && mentions[0].list.length === 0 ? mentions[0].value : null);
-    } else lastCaption = null;
+      captionRedshift.set(id, lastCaption ? redshiftOf(lastCaption) : null);
+    } else {
+      lastCaption = null;
+      lastTable = null;
+    }
   }
   const kindOfHeader = new Map<string, ClaimKind | null>();
   for (const c of cells) {
