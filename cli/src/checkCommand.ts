@@ -6,14 +6,13 @@
  */
 
 import { parseArgs } from 'node:util';
-import { checkProject, CosmologyCache, extractProject, formatOf, type FileCheck, type FileExtraction, type ParameterInput } from '../../shared/src/index.js';
+import { checkProject, CosmologyCache, extractProject, formatOf, type FileCheck, type FileExtraction, type ParameterInput, summarize, locate } from '../../shared/src/index.js';
 import { cosmologyFromText } from './calcCommand.js';
 import { fileResolver } from './extractCommand.js';
 import { EXIT, UsageError, type CliIo } from './io.js';
 import { htmlReport } from './report/htmlReport.js';
 import { jsonReport } from './report/jsonReport.js';
 import { sarifReport } from './report/sarifReport.js';
-import { summarize, sweptFile } from './report/sweep.js';
 import { textReport } from './report/textReport.js';
 
 export const CHECK_HELP = `Usage: comove check PATH… [options]
@@ -150,7 +149,7 @@ export function runCheck(argv: string[], io: CliIo, version: string): number {
   });
   if (progress) io.stderr('\r' + ' '.repeat(72) + '\r');
 
-  const swept = checked.map(sweptFile);
+  const swept = checked.map(locate);
   const summary = summarize(swept);
   if (format === 'json') io.stdout(JSON.stringify(jsonReport(swept, summary), null, 1) + '\n');
   else if (format === 'sarif') io.stdout(JSON.stringify(sarifReport(swept, version), null, 1) + '\n');

@@ -10,8 +10,7 @@ import { execFileSync, spawnSync } from 'node:child_process';
 import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { checkProject, extractProject, readLatex, extractClaims } from '../../shared/src/index.js';
-import { summarize, sweptFile } from '../../cli/src/report/sweep.js';
+import { checkProject, extractProject, readLatex, extractClaims, summarize, locate } from '../../shared/src/index.js';
 import { textReport } from '../../cli/src/report/textReport.js';
 import { syntheticLatexManuscript } from './syntheticManuscript.js';
 
@@ -37,7 +36,7 @@ const extract = time(5, () => extractClaims(readLatex(latex)));
 const check = time(5, () => checkProject(project.files));
 const noFit = time(5, () => checkProject(project.files, { fitAuthorCosmology: false }));
 const full = time(5, () => {
-  const files = checkProject(extractProject({ uri: 'bench.tex', text: latex }).files).map(sweptFile);
+  const files = checkProject(extractProject({ uri: 'bench.tex', text: latex }).files).map(locate);
   return textReport(files, summarize(files), { showConsistent: false });
 });
 const checked = checkProject(project.files)[0];

@@ -5,8 +5,7 @@
  * computed curves, inconsistent ones in a colour and shape of their own.
  */
 
-import { chartData, CosmologyCache, kindTitle, significant, whereText, type Chart, type ClaimCheck } from '../../../shared/src/index.js';
-import type { Summary, SweptFile } from './sweep.js';
+import { chartData, CosmologyCache, kindTitle, significant, whereText, type Chart, type ClaimCheck, type Summary, type LocatedCheck } from '../../../shared/src/index.js';
 
 function esc(s: string): string {
   return s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;');
@@ -75,7 +74,7 @@ export function chartSvg(chart: Chart, id: string): string {
   return parts.join('');
 }
 
-function row(f: SweptFile, c: ClaimCheck, index: number): string {
+function row(f: LocatedCheck, c: ClaimCheck, index: number): string {
   const r = f.claimRange(c);
   const stated = `${c.claim.value.text}${c.unitText ? ` ${c.unitText}` : ''}`;
   const computed = c.computed === null ? '—' : `${significant(c.computed, c.claim.value.significantDigits + 1)}${c.unitText ? ` ${c.unitText}` : ''}`;
@@ -98,7 +97,7 @@ tr.consistent td.verdict{color:#1b7332}code{background:#f2f3f6;padding:1px 4px;b
 .chart .chart-title{font-size:13px;font-weight:600;fill:#222}.chart .curve{fill:none;stroke-width:2}.chart .miss{stroke:#c0141e;stroke-dasharray:3 3}
 ul.findings li{margin:2px 0}`;
 
-export function htmlReport(files: readonly SweptFile[], summary: Summary, meta: { version: string; generated: string }): string {
+export function htmlReport(files: readonly LocatedCheck[], summary: Summary, meta: { version: string; generated: string }): string {
   const cache = new CosmologyCache();
   const sections = files.map((f, fi) => {
     const set = f.check.parameters;

@@ -1,8 +1,8 @@
 /** `comove check --format json`: one object per file with declarations, claims and problems; lines 0-based as in LSP. */
 
-import type { Summary, SweptFile } from './sweep.js';
+import type { Summary, LocatedCheck } from '../../../shared/src/index.js';
 
-export function jsonReport(files: readonly SweptFile[], summary: Summary): Record<string, unknown> {
+export function jsonReport(files: readonly LocatedCheck[], summary: Summary): Record<string, unknown> {
   return {
     files: files.map((f) => {
       const x = f.check.extraction;

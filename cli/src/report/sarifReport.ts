@@ -4,8 +4,7 @@
  * 1-based lines and columns in UTF-16 code units (the SARIF default column kind).
  */
 
-import { RULES, ruleFor, type RuleName } from '../../../shared/src/index.js';
-import type { Range, SweptFile } from './sweep.js';
+import { RULES, ruleFor, type RuleName, type Range, type LocatedCheck } from '../../../shared/src/index.js';
 
 export const SARIF_SCHEMA = 'https://docs.oasis-open.org/sarif/sarif/v2.1.0/errata01/os/schemas/sarif-schema-2.1.0.json';
 
@@ -19,7 +18,7 @@ function location(path: string, r: Range): Record<string, unknown> {
   return { physicalLocation: { artifactLocation: { uri: encodeURI(path.replace(/\\/g, '/')) }, region: region(r) } };
 }
 
-export function sarifReport(files: readonly SweptFile[], version: string): Record<string, unknown> {
+export function sarifReport(files: readonly LocatedCheck[], version: string): Record<string, unknown> {
   const ruleIndex = new Map(RULES.map((r, i) => [r.name, i]));
   const results: Array<Record<string, unknown>> = [];
   const add = (name: RuleName, level: Level, message: string, path: string, r: Range, related: Range[] = [], markdown?: string) => {

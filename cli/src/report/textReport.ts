@@ -1,8 +1,7 @@
 /** The readable report of `comove check`: per file, each claim with line:column, stated → recomputed, verdict and slip; then the totals. */
 
-import { kindTitle, significant, whereText, type ClaimCheck } from '../../../shared/src/index.js';
+import { kindTitle, significant, whereText, type ClaimCheck, type Summary, type LocatedCheck } from '../../../shared/src/index.js';
 import { alignColumns } from '../format.js';
-import type { Summary, SweptFile } from './sweep.js';
 
 function at(r: { start: { line: number; character: number } }): string {
   return `${r.start.line + 1}:${r.start.character + 1}`;
@@ -15,7 +14,7 @@ function verdictText(c: ClaimCheck): string {
   return `INCONSISTENT${pct}${c.slip ? ` — ${c.slip.description}` : ''}`;
 }
 
-export function textReport(files: readonly SweptFile[], summary: Summary, options: { showConsistent: boolean }): string {
+export function textReport(files: readonly LocatedCheck[], summary: Summary, options: { showConsistent: boolean }): string {
   const out: string[] = [];
   for (const f of files) {
     const set = f.check.parameters;

@@ -72,6 +72,8 @@ export interface CheckOptions {
   readonly override?: ParameterInput | null;
   /** A set inherited from the including file, used when the file declares none. */
   readonly inherited?: ParameterChoice | null;
+  /** A set to use when a file declares none and inherits none (an editor's default setting). */
+  readonly fallback?: ParameterInput | null;
   /** Built parameter sets, shared across files and calls (the caller owns it). */
   readonly cache?: CosmologyCache;
   /** Whether to look for slips (default true). */
@@ -101,7 +103,7 @@ export function checkFile(file: FileExtraction, options: CheckOptions = {}): Fil
     return { ...choice, line: lineColumn(file.text, at, lineStarts).line };
   };
   const own = withLine(documentChoice(file.declarations, file.uri));
-  const documentSet = options.override ? overrideChoice(options.override) : own ?? options.inherited ?? null;
+  const documentSet = options.override ? overrideChoice(options.override) : own ?? options.inherited ?? (options.fallback ? overrideChoice(options.fallback, 'default') : null);
   const findings: Finding[] = [];
 
   const built = new Map<ParameterChoice, { cosmology: Cosmology } | { error: string }>();
@@ -166,7 +168,7 @@ export function checkFile(file: FileExtraction, options: CheckOptions = {}): Fil
     });
   }
   if (options.fitAuthorCosmology !== false) {
-    const documentWide = checks.filter((c) => c.status !== 'unchecked' && (c.parameters?.origin === 'declared' || c.parameters?.origin === 'inherited' || c.parameters?.origin === 'override'));
+    const documentWide = checks.filter((c) => c.status !== 'unchecked' && c.parameters === documentSet);
     const pool = documentSet ? documentWide.map((c) => c.claim) : file.claims;
     const declared = documentSet ? build(documentSet) : null;
     const fit = fitAuthorCosmology(pool, { cache, relativeFloor: floor, declared: declared && 'cosmology' in declared ? declared.cosmology : null });
@@ -183,7 +185,7 @@ export function checkProject(files: readonly FileExtraction[], options: CheckOpt
   let inherited: ParameterChoice | null = options.inherited ?? null;
   for (const f of files) {
     const r = checkFile(f, { ...options, cache, inherited: documentChoice(f.declarations, f.uri) ? null : inherited });
-    if (!inherited && r.parameters && r.parameters.origin !== 'override') inherited = { ...r.parameters, origin: 'inherited' };
+    if (!inherited && r.parameters && r.parameters.origin !== 'override' && r.parameters.origin !== 'default') inherited = { ...r.parameters, origin: 'inherited' };
     out.push(r);
   }
   return out;

@@ -100,7 +100,7 @@ export function explain(check: ClaimCheck, declaredAt: (uri: string, line: numbe
   }
   const p = check.parameters;
   if (p) {
-    const where = p.origin === 'override' ? 'given on the command line or in the settings' : p.uri && p.line !== undefined && p.line !== null ? `declared in ${declaredAt(p.uri, p.line)}${p.origin === 'inherited' ? ' (the including file)' : p.origin === 'other-model' ? " (another model's set, scoped to its section)" : p.origin === 'local' ? ' (local override)' : ''}` : 'declared in the manuscript';
+    const where = p.origin === 'override' ? 'given on the command line or in the settings' : p.origin === 'default' ? 'the default set from the settings (the manuscript declares none)' : p.uri && p.line !== undefined && p.line !== null ? `declared in ${declaredAt(p.uri, p.line)}${p.origin === 'inherited' ? ' (the including file)' : p.origin === 'other-model' ? " (another model's set, scoped to its section)" : p.origin === 'local' ? ' (local override)' : ''}` : 'declared in the manuscript';
     lines.push(`- Parameters: \`${p.text || '(none usable)'}\`, ${where}`);
   }
   if (check.slip) lines.push(`- Likely slip: ${check.slip.description} (${withUnit(significant(check.slip.value, n.significantDigits + 1), unit)})`);

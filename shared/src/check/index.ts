@@ -10,3 +10,4 @@ export * from './authorCosmology.js';
 export * from './migrate.js';
 export * from './findingCodes.js';
 export * from './chartData.js';
+export * from './located.js';

@@ -10,7 +10,7 @@ import type { Declaration } from '../claims/declarations.js';
 import type { ParameterInput } from '../cosmology/parameters.js';
 import { formatParameterInput } from '../cosmology/parameterText.js';
 
-export type ChoiceOrigin = 'override' | 'declared' | 'local' | 'other-model' | 'inherited';
+export type ChoiceOrigin = 'override' | 'declared' | 'local' | 'other-model' | 'inherited' | 'default';
 
 export interface ParameterChoice {
   readonly input: ParameterInput;
@@ -27,8 +27,8 @@ export interface ParameterChoice {
   readonly line?: number | null;
 }
 
-export function overrideChoice(input: ParameterInput): ParameterChoice {
-  return { input, origin: 'override', declarations: [], uri: null, text: formatParameterInput(input), incomplete: null };
+export function overrideChoice(input: ParameterInput, origin: 'override' | 'default' = 'override'): ParameterChoice {
+  return { input, origin, declarations: [], uri: null, text: formatParameterInput(input), incomplete: null };
 }
 
 /** The document-wide set a file declares, or null if it declares none. */

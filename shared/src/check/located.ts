@@ -1,14 +1,16 @@
 /**
- * The result of a sweep over manuscripts, shaped for the reports: each file's check with its
- * source positions (0-based lines and UTF-16 characters, as in LSP) and the totals.
+ * A file's check with source positions: 0-based lines and UTF-16 characters, as in LSP, for
+ * the reports and the language server. Plain data; the callers convert it to their own types.
  */
 
-import { explain, lineColumn, lineStartsOf, type ClaimCheck, type FileCheck } from '../../../shared/src/index.js';
+import { lineColumn, lineStartsOf } from '../claims/extraction.js';
+import type { ClaimCheck, FileCheck } from './checker.js';
+import { explain } from './explain.js';
 
 export type Position = { line: number; character: number };
 export type Range = { start: Position; end: Position };
 
-export interface SweptFile {
+export interface LocatedCheck {
   readonly path: string;
   readonly check: FileCheck;
   /** Source range of a reading-text range. */
@@ -17,6 +19,8 @@ export interface SweptFile {
   readonly sourceRange: (start: number, end: number) => Range;
   /** Range of a claim's number and unit. */
   readonly claimRange: (c: ClaimCheck) => Range;
+  /** Source offset of a reading-text offset. */
+  readonly sourceOffset: (readingOffset: number) => number;
   readonly explanation: (c: ClaimCheck) => string;
 }
 
@@ -29,7 +33,7 @@ export interface Summary {
   unchecked: number;
 }
 
-export function sweptFile(check: FileCheck): SweptFile {
+export function locate(check: FileCheck): LocatedCheck {
   const source = check.extraction.text;
   const reading = check.extraction.reading.reading;
   const starts = lineStartsOf(source);
@@ -44,11 +48,12 @@ export function sweptFile(check: FileCheck): SweptFile {
     range,
     sourceRange,
     claimRange: (c) => range(c.claim.value.start, c.claim.end),
+    sourceOffset: (o) => reading.sourceStart(o),
     explanation: (c) => explain(c, (uri, line) => `[${uri}, line ${line + 1}](${uri}#L${line + 1})`),
   };
 }
 
-export function summarize(files: readonly SweptFile[]): Summary {
+export function summarize(files: readonly LocatedCheck[]): Summary {
   const s: Summary = { files: files.length, claims: 0, checked: 0, consistent: 0, inconsistent: 0, unchecked: 0 };
   for (const f of files) {
     for (const c of f.check.checks) {
