@@ -23,6 +23,9 @@ await build({
 });
 chmodSync('dist/cli.js', 0o755);
 
+// The language server, for `node dist/server.js --stdio` and the end-to-end tests.
+await build({ ...common, entryPoints: ['server/src/main.ts'], outfile: 'dist/server.js' });
+
 if (process.argv.includes('--bench')) {
   await build({ ...common, entryPoints: ['test/bench/engine.bench.ts'], outfile: 'dist/bench/engine.bench.js' });
   await build({ ...common, entryPoints: ['test/bench/reader.bench.ts'], outfile: 'dist/bench/reader.bench.js' });
