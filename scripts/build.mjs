@@ -30,4 +30,5 @@ if (process.argv.includes('--bench')) {
   await build({ ...common, entryPoints: ['test/bench/engine.bench.ts'], outfile: 'dist/bench/engine.bench.js' });
   await build({ ...common, entryPoints: ['test/bench/reader.bench.ts'], outfile: 'dist/bench/reader.bench.js' });
   await build({ ...common, entryPoints: ['test/bench/check.bench.ts'], outfile: 'dist/bench/check.bench.js' });
+  await build({ ...common, entryPoints: ['test/bench/server.bench.ts'], outfile: 'dist/bench/server.bench.js' });
 }

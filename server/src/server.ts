@@ -34,6 +34,8 @@ import { Projects } from './projects.js';
 import { DEFAULT_SETTINGS, defaultParameterInput, readSettings, type ComoveSettings } from './settings.js';
 
 export const SERVER_VERSION = '0.1.0';
+/** After this pause in typing, the document is checked in full (with the fit of the author's cosmology). */
+const FULL_AFTER_IDLE_MS = 1500;
 
 /** What the last analysis found for one file. */
 interface FileResult {
@@ -75,8 +77,12 @@ export function startServer(connection: Connection): void {
   const languageOf = (uri: string): string => documents.get(uri)?.languageId ?? ({ latex: 'latex', markdown: 'markdown', plaintext: 'plaintext' } as const)[formatOf(uri)];
   const watched = (uri: string) => settings.languages.includes(languageOf(uri)) || languageOf(uri) === 'plaintext' && settings.languages.includes('plaintext');
 
-  /** Checks the project a file belongs to and publishes diagnostics for every file of it. */
-  const analyse = (root: string) => {
+  /**
+   * Checks the project a file belongs to and publishes diagnostics for every file of it. The fit
+   * of the author's cosmology (tens of milliseconds) runs only in a `full` analysis: on open, on
+   * save, on a configuration change, and once typing has paused for FULL_AFTER_IDLE_MS.
+   */
+  const analyse = (root: string, full = true) => {
     const text = projects.read(root);
     if (text === null) return;
     projects.forgetRoot(root);
@@ -90,7 +96,7 @@ export function startServer(connection: Connection): void {
       return;
     }
     projects.learn(root, files.map((f) => f.uri));
-    const checks = checkProject(files, { relativeFloor: settings.relativeFloor / 100, cache, fallback: fallback.input });
+    const checks = checkProject(files, { relativeFloor: settings.relativeFloor / 100, cache, fallback: fallback.input, fitAuthorCosmology: full });
     for (const check of checks) {
       const uri = check.extraction.uri;
       const doc = documents.get(uri);
@@ -103,23 +109,35 @@ export function startServer(connection: Connection): void {
     }
   };
 
-  const schedule = (uri: string, delay = settings.debounceMs) => {
+  const idleTimers = new Map<string, NodeJS.Timeout>();
+  const schedule = (uri: string, delay = settings.debounceMs, full = false) => {
     const doc = documents.get(uri);
     if (!doc || !watched(uri)) return;
     const root = projects.rootOf(uri, doc.getText(), doc.languageId);
-    const pending = timers.get(root);
-    if (pending) clearTimeout(pending);
+    for (const timersOf of [timers, idleTimers]) {
+      const pending = timersOf.get(root);
+      if (pending) clearTimeout(pending);
+    }
     timers.set(
       root,
       setTimeout(() => {
         timers.delete(root);
-        analyse(root);
+        analyse(root, full);
       }, delay),
     );
+    if (!full) {
+      idleTimers.set(
+        root,
+        setTimeout(() => {
+          idleTimers.delete(root);
+          analyse(root, true);
+        }, FULL_AFTER_IDLE_MS),
+      );
+    }
   };
 
   const recheckAll = () => {
-    for (const doc of documents.all()) schedule(doc.uri, 0);
+    for (const doc of documents.all()) schedule(doc.uri, 0, true);
   };
 
   const fetchSettings = async () => {
@@ -142,7 +160,7 @@ export function startServer(connection: Connection): void {
         clearTimeout(pending);
         timers.delete(root);
       }
-      analyse(root);
+      analyse(root, false);
       r = results.get(uri);
     }
     return r ?? null;
@@ -155,7 +173,7 @@ export function startServer(connection: Connection): void {
     if (init?.settings) settings = readSettings(init.settings);
     return {
       capabilities: {
-        textDocumentSync: { openClose: true, change: TextDocumentSyncKind.Incremental },
+        textDocumentSync: { openClose: true, change: TextDocumentSyncKind.Incremental, save: { includeText: false } },
         hoverProvider: true,
         codeActionProvider: { codeActionKinds: [CodeActionKind.QuickFix, CodeActionKind.Refactor], resolveProvider: true },
         inlayHintProvider: true,
@@ -186,8 +204,9 @@ export function startServer(connection: Connection): void {
     recheckAll();
   });
 
-  documents.onDidOpen((e) => schedule(e.document.uri, 0));
+  documents.onDidOpen((e) => schedule(e.document.uri, 0, true));
   documents.onDidChangeContent((e) => schedule(e.document.uri));
+  documents.onDidSave((e) => schedule(e.document.uri, 0, true));
   documents.onDidClose((e) => {
     const r = results.get(e.document.uri);
     // A file of a project stays checked while its root is open; a file on its own is cleared.
