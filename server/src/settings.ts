@@ -30,7 +30,7 @@ export const DEFAULT_SETTINGS: ComoveSettings = {
   enabledKinds: [],
   languages: ['latex', 'tex', 'markdown'],
   inlayHints: 'inconsistent',
-  debounceMs: 15,
+  debounceMs: 5,
 };
 
 /** Settings from the client's answer (any shape), falling back to the defaults value by value. */

@@ -36,8 +36,8 @@ export class LspClient {
   /** Every publication, in order, with the time it arrived. */
   readonly published: Array<{ at: number; params: PublishDiagnosticsParams }> = [];
 
-  constructor(server: string = SERVER) {
-    this.process = spawn(process.execPath, [server, '--stdio'], { stdio: ['pipe', 'pipe', 'inherit'] });
+  constructor(server: string = SERVER, nodeOptions: readonly string[] = []) {
+    this.process = spawn(process.execPath, [...nodeOptions, server, '--stdio'], { stdio: ['pipe', 'pipe', 'inherit'] });
     this.connection = createProtocolConnection(new StreamMessageReader(this.process.stdout!), new StreamMessageWriter(this.process.stdin!));
     this.connection.onNotification(PublishDiagnosticsNotification.type, (p) => {
       this.published.push({ at: performance.now(), params: p });

@@ -14,6 +14,7 @@ import { ARCSEC_RAD } from '../cosmology/constants.js';
 import type { Unit } from '../cosmology/units.js';
 import { findNumbers, unitAt, type StatedNumber } from './numberParser.js';
 import { findRedshifts, type RedshiftMention } from './redshifts.js';
+import { sentenceKey, type SentenceCache } from './sentenceCache.js';
 
 export type RedshiftSource = 'sentence' | 'respectively' | 'previous-sentence' | 'table-row' | 'caption' | 'epoch';
 
@@ -88,14 +89,20 @@ function dimensionsMatch(want: Partial<Record<string, number>> | null, got: Reco
 }
 
 /** Extracts the claims of a document. Never throws. */
-export function extractClaims(doc: DocumentReading): ClaimScan {
+export function extractClaims(doc: DocumentReading, cache?: SentenceCache): ClaimScan {
+  cache?.beginRun();
   const units = new Map<string, Unit | null>();
   // Numbers of a span, parsed once: declarations, claims and table rows all ask for them.
   const parsed = new Map<number, { to: number; numbers: StatedNumber[] }>();
   const numbersIn = (from: number, to: number): StatedNumber[] => {
     const hit = parsed.get(from);
     if (hit && hit.to === to) return hit.numbers;
-    const numbers = findNumbers(doc.reading.text, from, to, units);
+    const key = cache ? `n${sentenceKey(doc.reading.text, { start: from, end: to })}` : '';
+    let numbers = cache?.takeNumbers(key, from) as StatedNumber[] | null;
+    if (!numbers) {
+      numbers = findNumbers(doc.reading.text, from, to, units);
+      cache?.putNumbers(key, from, numbers);
+    }
     parsed.set(from, { to, numbers });
     return numbers;
   };
@@ -108,7 +115,7 @@ export function extractClaims(doc: DocumentReading): ClaimScan {
   const inDeclaration = (pos: number) => inRanges(declared, pos);
   let blockIndex = 0;
 
-  let previous: { sentence: Sentence; mentions: RedshiftMention[] } | null = null;
+  let previous: { sentence: Sentence; mentions: readonly RedshiftMention[] } | null = null;
   /** Redshifts of named objects ("LDS-B1 lies at z = 0.512"), for later sentences that name them again. */
   const objectRedshifts = new Map<string, number>();
   /** The one redshift the paragraph is about so far, if it has named exactly one. */
@@ -118,152 +125,15 @@ export function extractClaims(doc: DocumentReading): ClaimScan {
     const block = doc.blocks[blockIndex];
     if (context && context.block !== block) context = null;
     if (block && block.kind === 'table-cell') continue; // table cells are read by the table pass
-    const numbers = numbersIn(sentence.start, sentence.end);
-    const mentions = findRedshifts(text, sentence.start, sentence.end, numbers);
-    const redshiftNumbers = new Set<number>([...mentions.map((m) => m.numberStart), ...mentions.flatMap((m) => m.listNumberStarts)]);
-    const statementRanges = parameterStatements(text, sentence.start, sentence.end, numbers);
-    const sentenceText = text.slice(sentence.start, sentence.end);
-    const measured = MEASURED.test(sentenceText) && !/\badopt|\bassum/i.test(sentenceText);
-
-    const found: Array<Omit<Claim, 'z' | 'zRange' | 'zSource' | 'unchecked' | 'confidence' | 'sentenceRedshifts'> & { cueDistance: number }> = [];
-    /** Records a claim on number n, ending at `end` (the unit's end, or the number's). */
-    const add = (kind: ClaimKind, n: StatedNumber, end: number, cueDistance = 0, extra: { angleArcsec?: number; parameter?: string; sinceEpoch?: 'recombination' | null } = {}) =>
-      found.push({
-        kind, value: n, angleArcsec: extra.angleArcsec ?? null, parameter: extra.parameter ?? null, sinceEpoch: extra.sinceEpoch ?? null,
-        start: n.start, end, sentenceStart: sentence.start, sentenceEnd: sentence.end, cueDistance,
-      });
-    /** A proper (or, if the text says so, comoving) scale claim; with the angle when a size is stated for one. */
-    const addScale = (n: StatedNumber, near: string, angleArcsec?: number) =>
-      add(/comoving/i.test(near) ? 'comovingScale' : 'properScale', n, n.unit!.end, 0, angleArcsec === undefined ? {} : { angleArcsec });
-    numbers.forEach((stated, index) => {
-      let n = stated;
-      if (inSkip(n.start) || inDeclaration(n.start)) return;
-      if (statementRanges.some((st) => n.start >= st.start && n.start < st.end)) {
-        // Ω and H0 statements outside a declaration are density and Hubble-constant claims.
-        const st = statementRanges.find((x) => n.start >= x.start && n.start < x.end)!;
-        if (st.key !== 'H0' && st.key !== 'h' && !measured) {
-          add('densityParameter', n, n.end, 0, { parameter: st.key });
-        }
-        return;
-      }
-      // Everything before the number in its sentence; the nearest cue wins.
-      const before = text.slice(sentence.start, n.start);
-      const near = text.slice(Math.max(sentence.start, n.start - 90), n.start);
-      const after = text.slice(n.end, Math.min(sentence.end, n.end + 40));
-      // "4.4 and 6.1 kpc": a number without a unit shares the unit of the next one in a list.
-      const next = numbers[index + 1];
-      const shared = !n.unit && next?.unit?.unit && /^\s*(?:,|and|or|,\s*and)\s*$/.test(text.slice(n.end, next.start)) ? next.unit : null;
-      if (shared) n = { ...n, unit: { ...shared, start: n.end, end: n.end } };
-      const unit = n.unit?.unit ?? null;
-      if (NOT_A_CLAIM.test(near) || (n.uncertainty && measured)) return;
-
-      if (redshiftNumbers.has(n.start)) {
-        // A redshift is a claim only when it names an epoch ("recombination at z ≈ 1100").
-        const epoch = pureNumberKind(near, n);
-        if (epoch && (epoch.kind === 'recombination' || epoch.kind === 'matterRadiationEquality' || epoch.kind === 'dragEpoch' || epoch.kind === 'accelerationOnset')) {
-          add(epoch.kind, n, n.end, epoch.distance);
-        }
-        return;
-      }
-
-      if (n.unit && n.unit.text.trim().startsWith('%')) {
-        const COMPONENT = /(baryon|cold dark matter|dark matter|dark energy|matter|radiation|neutrino)s?/i;
-        const clauseBefore = near.slice(Math.max(near.lastIndexOf(','), near.lastIndexOf(';')) + 1);
-        const clauseAfter = after.split(/[,;]/)[0];
-        // "5% baryons" names the component after the number; "baryons make up 5%" before it.
-        const right = new RegExp(`^\\s*(?:of\\s+(?:the\\s+)?)?${COMPONENT.source}`, 'i').exec(after.slice(1));
-        const lastBefore = [...clauseBefore.matchAll(new RegExp(COMPONENT.source, 'gi'))].pop();
-        const component = right ?? lastBefore ?? COMPONENT.exec(clauseAfter);
-        if (component && /universe|budget|energy density|content|composition|made|consists|dark energy|dark matter/i.test(sentenceText)) {
-          add('compositionPercentage', n, n.unit.end, 0, { parameter: component[1].toLowerCase() });
-        }
-        return;
-      }
-
-      if (unit) {
-        const dims = unit.dimensions as unknown as Record<string, number>;
-        // Scales: length per angle.
-        if (dims.length === 1 && dims.angle === -1) {
-          addScale(n, near);
-          return;
-        }
-        const lengthOnly = dims.length === 1 && Object.keys(dims).every((k) => k === 'length' || dims[k] === 0);
-        // "1″ corresponds to 8.4 kpc": a length after an angle.
-        if (lengthOnly && index > 0) {
-          const prev = numbers[index - 1];
-          const prevUnit = prev.unit?.unit;
-          const link = text.slice(prev.unit ? prev.unit.end : prev.end, n.start);
-          if (prevUnit && (prevUnit.dimensions.angle === 1) && ANGLE_TO_LENGTH.test(link)) {
-            addScale(n, near, prev.value * (prevUnit.factor / ARCSEC_RAD));
-            return;
-          }
-        }
-        // "4.4 and 6.1 kpc …, which corresponds to 1.0″": an angle after the lengths.
-        if (lengthOnly) {
-          const angle = numbers.slice(index + 1).find((m) => m.unit?.unit?.dimensions.angle === 1);
-          if (angle && /(?:corresponds?|correspond)\s+to\s*$|subtends?\s*$/i.test(text.slice(n.unit!.end, angle.start))) {
-            addScale(n, near, angle.value * (angle.unit!.unit!.factor / ARCSEC_RAD));
-            return;
-          }
-        }
-        // "one arcsecond corresponds to 5.5 kpc"
-        if (lengthOnly && /\b(?:one|an|each|a single)\s+(?:arcsec(?:ond)?|″)\s+(?:corresponds?\s+to|is|spans|equals)\s*(?:about |roughly |∼ ?|≈ ?|~ ?)?$/i.test(near)) {
-          addScale(n, near, 1);
-          return;
-        }
-        // The cue nearest before the number (or just after it: "6.6 Gpc for the luminosity distance").
-        let best: { kind: ClaimKind; distance: number } | null = null;
-        for (const cue of KIND_CUES) {
-          const volumeLike = cue.kind === 'comovingVolume' && dims.length === 3 && (dims.angle === 0 || dims.angle === -2);
-          if (!volumeLike && !dimensionsMatch(cue.dimension, dims)) continue;
-          const endBefore = lastMatchEnd(cue.pattern, before);
-          const afterUnit = text.slice(n.unit!.end, Math.min(sentence.end, n.unit!.end + 40));
-          const distance = endBefore >= 0 ? before.length - endBefore : /^\s*(?:for|as|is) the /.test(afterUnit) && cue.pattern.test(afterUnit) ? 25 : -1;
-          if (distance < 0) continue;
-          if (!best || distance < best.distance) best = { kind: cue.kind, distance };
-        }
-        if (!best && dims.time === 1 && Object.keys(dims).every((k) => k === 'time' || dims[k] === 0)) {
-          // "…left it 11.59 Gyr ago", "…was 4.8 Gyr old": the word after the time names it.
-          const afterTime = text.slice(n.unit!.end, Math.min(sentence.end, n.unit!.end + 12));
-          if (/^\s*ago\b/i.test(afterTime)) best = { kind: 'lookbackTime', distance: 30 };
-          else if (/^\s*old\b/i.test(afterTime)) best = { kind: 'age', distance: 30 };
-        }
-        if (!best) {
-          // Unlabelled times and distances are common in prose ("8.4 kpc", "13.8 Gyr") but unbound: leave them.
-          return;
-        }
-        const afterUnit = text.slice(n.unit!.end, Math.min(sentence.end, n.unit!.end + 30));
-        let kind: ClaimKind = best.kind;
-        // Words right after a time decide it: "12.6 Gyr ago", "4.8 Gyr old (today)".
-        if (dims.time === 1 && /^\s*ago\b/i.test(afterUnit)) kind = 'lookbackTime';
-        else if (dims.time === 1 && /^\s*old\b/i.test(afterUnit) && kind === 'lookbackTime') kind = 'age';
-        const clauseBefore = before.slice(Math.max(before.lastIndexOf(';'), before.lastIndexOf(',')) + 1);
-        if (kind === 'age' && (/^\s*(?:old\s*)?(?:today|now|at present|at z\s*=\s*0\b)/i.test(afterUnit) || /\b(?:today|now|at present|presently|currently)\b/i.test(clauseBefore))) kind = 'ageToday';
-        add(kind, n, n.unit!.end, best.distance);
-        return;
-      }
-
-      if (!n.unit) {
-        const pure = pureNumberKind(near, n);
-        if (pure) {
-          const since = pure.kind === 'expansionFactor' && /recombination|decoupling|last[- ]scattering|CMB/i.test(sentenceText) ? 'recombination' : null;
-          add(pure.kind, n, n.end, pure.distance, { sinceEpoch: since });
-        }
-      }
-    });
-
-    // Word numbers: "expanded a thousandfold", "the universe has tripled in size".
-    for (const m of sentenceText.matchAll(/\b(ten|hundred|thousand|million)fold\b|\b(doubled|tripled|quadrupled)\b(?=\s+(?:in size|its size))/gi)) {
-      const at = sentence.start + m.index!;
-      if (inSkip(at)) continue;
-      const word = (m[1] ?? m[2]).toLowerCase();
-      const value = ({ ten: 10, hundred: 100, thousand: 1000, million: 1e6, doubled: 2, tripled: 3, quadrupled: 4 } as Record<string, number>)[word];
-      const exact = m[2] !== undefined;
-      const n: StatedNumber = { value, start: at, end: at + m[0].length, digitsStart: at, digitsEnd: at + m[0].length, text: m[0], significantDigits: 1, resolution: exact ? 1 : value, qualifier: exact ? 'exact' : 'approximate', relation: null, uncertainty: null, range: null, unit: null };
-      const since = /recombination|decoupling|last[- ]scattering|CMB/i.test(sentenceText) ? 'recombination' : null;
-      add('expansionFactor', n, n.end, 0, { sinceEpoch: since });
+    const key = cache ? sentenceKey(text, sentence) : '';
+    let read = cache?.take(key, sentence.start) ?? null;
+    if (!read) {
+      read = readSentence(text, sentence, numbersIn(sentence.start, sentence.end));
+      cache?.put(key, sentence.start, read);
     }
-
+    const mentions = read.mentions;
+    const sentenceText = text.slice(sentence.start, sentence.end);
+    const found = read.found.filter((f) => !inSkip(f.start) && !inDeclaration(f.start));
     // Bind the redshift-dependent claims.
     const needing = found.filter((f) => NEEDS_REDSHIFT.has(f.kind) && f.sinceEpoch === null);
     // An epoch stated as a redshift ("recombination at z ≈ 1100") is also the redshift of the
@@ -323,7 +193,7 @@ export function extractClaims(doc: DocumentReading): ClaimScan {
           z = previous.mentions[0].value;
           zSource = 'previous-sentence';
           confidence -= 0.2;
-        } else if (previous && previous.mentions.length === 1 && !previous.mentions[0].range && previous.mentions[0].list.length === 0) {
+        } else if (previous && previous.mentions.length === 1 && !previous.mentions[0].range && previous.mentions[0].list.length === 0 && !isLimit(text, previous.mentions[0])) {
           z = previous.mentions[0].value;
           zSource = 'previous-sentence';
           confidence -= 0.3;
@@ -351,6 +221,9 @@ export function extractClaims(doc: DocumentReading): ClaimScan {
       });
     }
     previous = { sentence, mentions };
+    // A limit ("the volume to z = 3") says nothing about where the paragraph's objects are.
+    const anchors = mentions.filter((m) => !isLimit(text, m));
+    if (anchors.length === 0 && mentions.length > 0) continue;
     const distinctHere = [...new Set(flat.filter((m) => !m.range).map((m) => m.value))];
     if (distinctHere.length === 1 && !flat.some((m) => m.range)) {
       context = { block, z: distinctHere[0] };
@@ -361,7 +234,171 @@ export function extractClaims(doc: DocumentReading): ClaimScan {
 
   claims.push(...tableClaims(doc, inSkip, units, numbersIn));
   claims.sort((a, b) => a.start - b.start);
+  cache?.endRun();
   return { claims, declarations };
+}
+
+/** A claim found in a sentence before it is bound to a redshift. */
+type FoundClaim = Omit<Claim, 'z' | 'zRange' | 'zSource' | 'unchecked' | 'confidence' | 'sentenceRedshifts'> & { cueDistance: number };
+
+/** What a sentence says, from its text alone: its numbers, redshift mentions and typed (unbound) claims. */
+export interface SentenceReading {
+  readonly numbers: readonly StatedNumber[];
+  readonly mentions: readonly RedshiftMention[];
+  readonly found: readonly FoundClaim[];
+}
+
+/** Reads the numbers, redshifts and claims of one sentence. Depends only on the text in and just around the sentence. */
+function readSentence(text: string, sentence: Sentence, numbers: StatedNumber[]): SentenceReading {
+  const mentions = findRedshifts(text, sentence.start, sentence.end, numbers);
+  const redshiftNumbers = new Set<number>([...mentions.map((m) => m.numberStart), ...mentions.flatMap((m) => m.listNumberStarts)]);
+  const statementRanges = parameterStatements(text, sentence.start, sentence.end, numbers);
+  const sentenceText = text.slice(sentence.start, sentence.end);
+  const measured = MEASURED.test(sentenceText) && !/\badopt|\bassum/i.test(sentenceText);
+
+  const found: FoundClaim[] = [];
+  /** Records a claim on number n, ending at `end` (the unit's end, or the number's). */
+  const add = (kind: ClaimKind, n: StatedNumber, end: number, cueDistance = 0, extra: { angleArcsec?: number; parameter?: string; sinceEpoch?: 'recombination' | null } = {}) =>
+    found.push({
+      kind, value: n, angleArcsec: extra.angleArcsec ?? null, parameter: extra.parameter ?? null, sinceEpoch: extra.sinceEpoch ?? null,
+      start: n.start, end, sentenceStart: sentence.start, sentenceEnd: sentence.end, cueDistance,
+    });
+  /** A proper (or, if the text says so, comoving) scale claim; with the angle when a size is stated for one. */
+  const addScale = (n: StatedNumber, near: string, angleArcsec?: number) =>
+    add(/comoving/i.test(near) ? 'comovingScale' : 'properScale', n, n.unit!.end, 0, angleArcsec === undefined ? {} : { angleArcsec });
+  numbers.forEach((stated, index) => {
+    let n = stated;
+    if (statementRanges.some((st) => n.start >= st.start && n.start < st.end)) {
+      // Ω and H0 statements outside a declaration are density and Hubble-constant claims.
+      const st = statementRanges.find((x) => n.start >= x.start && n.start < x.end)!;
+      if (st.key !== 'H0' && st.key !== 'h' && !measured) {
+        add('densityParameter', n, n.end, 0, { parameter: st.key });
+      }
+      return;
+    }
+    // Everything before the number in its sentence; the nearest cue wins.
+    const before = text.slice(sentence.start, n.start);
+    const near = text.slice(Math.max(sentence.start, n.start - 90), n.start);
+    const after = text.slice(n.end, Math.min(sentence.end, n.end + 40));
+    // "4.4 and 6.1 kpc": a number without a unit shares the unit of the next one in a list.
+    const next = numbers[index + 1];
+    const shared = !n.unit && next?.unit?.unit && /^\s*(?:,|and|or|,\s*and)\s*$/.test(text.slice(n.end, next.start)) ? next.unit : null;
+    if (shared) n = { ...n, unit: { ...shared, start: n.end, end: n.end } };
+    const unit = n.unit?.unit ?? null;
+    if (NOT_A_CLAIM.test(near) || (n.uncertainty && measured)) return;
+
+    if (redshiftNumbers.has(n.start)) {
+      // A redshift is a claim only when it names an epoch ("recombination at z ≈ 1100").
+      const epoch = pureNumberKind(near, n);
+      if (epoch && (epoch.kind === 'recombination' || epoch.kind === 'matterRadiationEquality' || epoch.kind === 'dragEpoch' || epoch.kind === 'accelerationOnset')) {
+        add(epoch.kind, n, n.end, epoch.distance);
+      }
+      return;
+    }
+
+    if (n.unit && n.unit.text.trim().startsWith('%')) {
+      const COMPONENT = /(baryon|cold dark matter|dark matter|dark energy|matter|radiation|neutrino)s?/i;
+      const clauseBefore = near.slice(Math.max(near.lastIndexOf(','), near.lastIndexOf(';')) + 1);
+      const clauseAfter = after.split(/[,;]/)[0];
+      // "5% baryons" names the component after the number; "baryons make up 5%" before it.
+      const right = new RegExp(`^\\s*(?:of\\s+(?:the\\s+)?)?${COMPONENT.source}`, 'i').exec(after.slice(1));
+      const lastBefore = [...clauseBefore.matchAll(new RegExp(COMPONENT.source, 'gi'))].pop();
+      const component = right ?? lastBefore ?? COMPONENT.exec(clauseAfter);
+      if (component && /universe|budget|energy density|content|composition|made|consists|dark energy|dark matter/i.test(sentenceText)) {
+        add('compositionPercentage', n, n.unit.end, 0, { parameter: component[1].toLowerCase() });
+      }
+      return;
+    }
+
+    if (unit) {
+      const dims = unit.dimensions as unknown as Record<string, number>;
+      // Scales: length per angle.
+      if (dims.length === 1 && dims.angle === -1) {
+        addScale(n, near);
+        return;
+      }
+      const lengthOnly = dims.length === 1 && Object.keys(dims).every((k) => k === 'length' || dims[k] === 0);
+      // "1″ corresponds to 8.4 kpc": a length after an angle.
+      if (lengthOnly && index > 0) {
+        const prev = numbers[index - 1];
+        const prevUnit = prev.unit?.unit;
+        const link = text.slice(prev.unit ? prev.unit.end : prev.end, n.start);
+        if (prevUnit && (prevUnit.dimensions.angle === 1) && ANGLE_TO_LENGTH.test(link)) {
+          addScale(n, near, prev.value * (prevUnit.factor / ARCSEC_RAD));
+          return;
+        }
+      }
+      // "4.4 and 6.1 kpc …, which corresponds to 1.0″": an angle after the lengths.
+      if (lengthOnly) {
+        const angle = numbers.slice(index + 1).find((m) => m.unit?.unit?.dimensions.angle === 1);
+        if (angle && /(?:corresponds?|correspond)\s+to\s*$|subtends?\s*$/i.test(text.slice(n.unit!.end, angle.start))) {
+          addScale(n, near, angle.value * (angle.unit!.unit!.factor / ARCSEC_RAD));
+          return;
+        }
+      }
+      // "one arcsecond corresponds to 5.5 kpc"
+      if (lengthOnly && /\b(?:one|an|each|a single)\s+(?:arcsec(?:ond)?|″)\s+(?:corresponds?\s+to|is|spans|equals)\s*(?:about |roughly |∼ ?|≈ ?|~ ?)?$/i.test(near)) {
+        addScale(n, near, 1);
+        return;
+      }
+      // The cue nearest before the number (or just after it: "6.6 Gpc for the luminosity distance").
+      let best: { kind: ClaimKind; distance: number } | null = null;
+      for (const cue of KIND_CUES) {
+        const volumeLike = cue.kind === 'comovingVolume' && dims.length === 3 && (dims.angle === 0 || dims.angle === -2);
+        if (!volumeLike && !dimensionsMatch(cue.dimension, dims)) continue;
+        const endBefore = lastMatchEnd(cue.pattern, before);
+        const afterUnit = text.slice(n.unit!.end, Math.min(sentence.end, n.unit!.end + 40));
+        const distance = endBefore >= 0 ? before.length - endBefore : /^\s*(?:for|as|is) the /.test(afterUnit) && cue.pattern.test(afterUnit) ? 25 : -1;
+        if (distance < 0) continue;
+        if (!best || distance < best.distance) best = { kind: cue.kind, distance };
+      }
+      if (!best && dims.time === 1 && Object.keys(dims).every((k) => k === 'time' || dims[k] === 0)) {
+        // "…left it 11.59 Gyr ago", "…was 4.8 Gyr old": the word after the time names it.
+        const afterTime = text.slice(n.unit!.end, Math.min(sentence.end, n.unit!.end + 12));
+        if (/^\s*ago\b/i.test(afterTime)) best = { kind: 'lookbackTime', distance: 30 };
+        else if (/^\s*old\b/i.test(afterTime)) best = { kind: 'age', distance: 30 };
+      }
+      if (!best) {
+        // Unlabelled times and distances are common in prose ("8.4 kpc", "13.8 Gyr") but unbound: leave them.
+        return;
+      }
+      const afterUnit = text.slice(n.unit!.end, Math.min(sentence.end, n.unit!.end + 30));
+      let kind: ClaimKind = best.kind;
+      // Words right after a time decide it: "12.6 Gyr ago", "4.8 Gyr old (today)".
+      if (dims.time === 1 && /^\s*ago\b/i.test(afterUnit)) kind = 'lookbackTime';
+      else if (dims.time === 1 && /^\s*old\b/i.test(afterUnit) && kind === 'lookbackTime') kind = 'age';
+      const clauseBefore = before.slice(Math.max(before.lastIndexOf(';'), before.lastIndexOf(',')) + 1);
+      if (kind === 'age' && (/^\s*(?:old\s*)?(?:today|now|at present|at z\s*=\s*0\b)/i.test(afterUnit) || /\b(?:today|now|at present|presently|currently)\b/i.test(clauseBefore))) kind = 'ageToday';
+      add(kind, n, n.unit!.end, best.distance);
+      return;
+    }
+
+    if (!n.unit) {
+      const pure = pureNumberKind(near, n);
+      if (pure) {
+        const since = pure.kind === 'expansionFactor' && /recombination|decoupling|last[- ]scattering|CMB/i.test(sentenceText) ? 'recombination' : null;
+        add(pure.kind, n, n.end, pure.distance, { sinceEpoch: since });
+      }
+    }
+  });
+
+  // Word numbers: "expanded a thousandfold", "the universe has tripled in size".
+  for (const m of sentenceText.matchAll(/\b(ten|hundred|thousand|million)fold\b|\b(doubled|tripled|quadrupled)\b(?=\s+(?:in size|its size))/gi)) {
+    const at = sentence.start + m.index!;
+    const word = (m[1] ?? m[2]).toLowerCase();
+    const value = ({ ten: 10, hundred: 100, thousand: 1000, million: 1e6, doubled: 2, tripled: 3, quadrupled: 4 } as Record<string, number>)[word];
+    const exact = m[2] !== undefined;
+    const n: StatedNumber = { value, start: at, end: at + m[0].length, digitsStart: at, digitsEnd: at + m[0].length, text: m[0], significantDigits: 1, resolution: exact ? 1 : value, qualifier: exact ? 'exact' : 'approximate', relation: null, uncertainty: null, range: null, unit: null };
+    const since = /recombination|decoupling|last[- ]scattering|CMB/i.test(sentenceText) ? 'recombination' : null;
+    add('expansionFactor', n, n.end, 0, { sinceEpoch: since });
+  }
+
+  return { numbers, mentions, found };
+}
+
+/** Whether a redshift mention is a limit ("to z = 3", "out to z = 6", "within z < 1") rather than where something is. */
+function isLimit(text: string, m: RedshiftMention): boolean {
+  return /\b(?:to|within|beyond|below|above|out to|up to|down to)\s*\$?\s*$/i.test(text.slice(Math.max(0, m.start - 12), m.start));
 }
 
 /** Names of objects in a sentence: catalogue-style identifiers such as LDS-B1, Ember-3, J1234+56. */

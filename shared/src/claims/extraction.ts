@@ -9,6 +9,7 @@ import { unreadDocument, type DocumentFormat, type DocumentReading, type ReaderP
 import { readLatex, type MacroDefinition } from '../reader/latexScanner.js';
 import { readMarkdown } from '../reader/markdownReader.js';
 import { readPlainText } from '../reader/plainTextReader.js';
+import type { SentenceCache } from './sentenceCache.js';
 import { extractClaims, type Claim } from './claimExtractor.js';
 import type { Declaration, DeclarationProblem, SkipRegion } from './declarations.js';
 
@@ -64,8 +65,8 @@ export function readFile(file: SourceFile, format: DocumentFormat = formatOf(fil
   return readPlainText(file.text);
 }
 
-function extractFile(file: SourceFile, reading: DocumentReading): FileExtraction {
-  const { claims, declarations } = extractClaims(reading);
+function extractFile(file: SourceFile, reading: DocumentReading, cache?: SentenceCache): FileExtraction {
+  const { claims, declarations } = extractClaims(reading, cache);
   return {
     uri: file.uri,
     text: file.text,
@@ -83,14 +84,19 @@ function extractFile(file: SourceFile, reading: DocumentReading): FileExtraction
  * Reads a file and, for LaTeX, the files it includes (depth first, each once), passing the
  * root's macros on. Never throws.
  */
-export function extractProject(root: SourceFile, resolve: IncludeResolver = () => null): ProjectExtraction {
+export interface ExtractOptions {
+  /** Sentence readings kept between calls, per file (an editor's; see sentenceCache.ts). */
+  readonly sentenceCache?: (uri: string) => SentenceCache | undefined;
+}
+
+export function extractProject(root: SourceFile, resolve: IncludeResolver = () => null, options: ExtractOptions = {}): ProjectExtraction {
   const files: FileExtraction[] = [];
   const seen = new Set<string>();
   const visit = (file: SourceFile, macros: readonly MacroDefinition[], depth: number) => {
     if (seen.has(file.uri)) return;
     seen.add(file.uri);
     const reading = readFile(file, formatOf(file.uri, file.text), macros);
-    const extraction = extractFile(file, reading);
+    const extraction = extractFile(file, reading, options.sentenceCache?.(file.uri));
     const problems = [...extraction.problems];
     files.push({ ...extraction, problems });
     if (reading.format !== 'latex') return;

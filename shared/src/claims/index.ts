@@ -5,3 +5,4 @@ export * from './redshifts.js';
 export * from './declarations.js';
 export { extractClaims, type Claim, type ClaimScan, type RedshiftSource } from './claimExtractor.js';
 export * from './extraction.js';
+export * from './sentenceCache.js';
