@@ -143,6 +143,39 @@ describe('language server over stdio', () => {
     expect(p.diagnostics.map((d) => [d.code, d.range.start.line])).toEqual([['CMV101', 1]]);
   });
 
+  it('re-checks the children when the root is edited', async () => {
+    const root = uriOf('thesis/main.tex');
+    const child = uriOf('thesis/chapters/distances.tex');
+    await client.open(root, 'latex', readFileSync(join(dir, 'thesis/main.tex'), 'utf8'));
+    await client.diagnostics(root);
+    // Declare the Planck 2018 set instead: the chapter's 2.70 Gpc at z = 0.48 no longer agrees.
+    await client.change(root, [{ range: { start: { line: 1, character: 0 }, end: { line: 1, character: 32 } }, text: '% comove: planck-2018' }]);
+    const p = await client.diagnostics(child, (x) => x.diagnostics.some((d) => d.range.start.line === 0), 20_000, true);
+    expect(p.diagnostics.map((d) => d.range.start.line).sort()).toEqual([0, 1]);
+    await client.change(root, [{ range: { start: { line: 1, character: 0 }, end: { line: 1, character: 21 } }, text: '% comove: H0=70 Omega_m=0.3 flat' }]);
+    await client.diagnostics(child, (x) => x.diagnostics.length === 1, 20_000, true);
+  });
+
+  it('never reads an included file outside the workspace folders', async () => {
+    const outside = mkdtempSync(join(tmpdir(), 'comove-outside-'));
+    writeFileSync(join(outside, 'secret.tex'), 'At $z = 0.48$ the luminosity distance is 9.99\\,Gpc.\n');
+    const uri = uriOf('escape.tex');
+    const relative = join('..', outside.split('/').pop()!, 'secret');
+    await client.open(uri, 'latex', `\\documentclass{article}\n% comove: flat-70-0.3\n\\begin{document}\n\\input{${relative}}\n\\end{document}\n`);
+    const p = await client.diagnostics(uri, (x) => x.diagnostics.length > 0);
+    expect(p.diagnostics.map((d) => d.message)).toEqual([`\\input{${relative}}: the file cannot be found`]);
+  });
+
+  it('says once, at the top, when a manuscript with claims declares no parameter set', async () => {
+    const uri = uriOf('undeclared.md');
+    await client.open(uri, 'markdown', '# Notes\n\nAt $z = 1.9$ the luminosity distance is 14.6 Gpc and the lookback time 10.1 Gyr.\n');
+    const p = await client.diagnostics(uri, (x) => x.diagnostics.length > 0);
+    expect(p.diagnostics.map((d) => [d.code, d.severity, d.range.start.line])).toEqual([['CMV201', 3, 0]]);
+    const actions = (await client.connection.sendRequest(CodeActionRequest.type, { textDocument: { uri }, range: { start: { line: 0, character: 0 }, end: { line: 0, character: 0 } }, context: { diagnostics: p.diagnostics } })) as CodeAction[];
+    expect(actions.map((a) => a.title)).toEqual(['Declare the parameter set flat-70-0.3', 'Declare the parameter set planck-2018']);
+    expect((actions[0].edit!.changes![uri][0] as TextEdit).newText).toBe('<!-- comove: flat-70-0.3 -->\n');
+  });
+
   it('re-checks open documents when the configuration changes', async () => {
     const uri = uriOf('thesis/chapters/distances.tex');
     await client.changeConfiguration({ inconsistentSeverity: 'information' });
