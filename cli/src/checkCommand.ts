@@ -9,7 +9,7 @@ import { parseArgs } from 'node:util';
 import { checkProject, CosmologyCache, extractProject, formatOf, type FileCheck, type FileExtraction, type ParameterInput, summarize, locate } from '../../shared/src/index.js';
 import { cosmologyFromText } from './calcCommand.js';
 import { fileResolver } from './extractCommand.js';
-import { EXIT, UsageError, type CliIo } from './io.js';
+import { EXIT, readingOnce, UsageError, type CliIo } from './io.js';
 import { htmlReport } from './report/htmlReport.js';
 import { jsonReport } from './report/jsonReport.js';
 import { sarifReport } from './report/sarifReport.js';
@@ -85,15 +85,7 @@ export function runCheck(argv: string[], io: CliIo, version: string): number {
   const override: ParameterInput | null = values.params !== undefined ? cosmologyFromText(values.params).input : null;
   if (values.report !== undefined && !values.report.trim()) throw new UsageError('--report needs a file name');
 
-  const texts = new Map<string, string>();
-  const remembering: CliIo = {
-    ...io,
-    readFile: (path) => {
-      const text = texts.get(path) ?? io.readFile(path);
-      texts.set(path, text);
-      return text;
-    },
-  };
+  const remembering = readingOnce(io);
   const read = (path: string): string => {
     try {
       return remembering.readFile(path);
@@ -111,7 +103,6 @@ export function runCheck(argv: string[], io: CliIo, version: string): number {
     const ext = values.as === undefined ? '' : ({ latex: '.tex', tex: '.tex', markdown: '.md', md: '.md', text: '.txt', plaintext: '.txt' } as Record<string, string>)[values.as];
     if (ext === undefined) throw new UsageError(`--as must be latex, markdown or text, not '${values.as}'`);
     const uri = `<stdin>${ext || { latex: '.tex', markdown: '.md', plaintext: '.txt' }[formatOf('', text)]}`;
-    texts.set(uri, text);
     roots.push({ uri, text });
     named.add(uri);
   } else {

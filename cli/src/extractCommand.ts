@@ -15,7 +15,7 @@ import {
   type IncludeResolver,
 } from '../../shared/src/index.js';
 import { alignColumns, formatNumber } from './format.js';
-import { EXIT, UsageError, type CliIo } from './io.js';
+import { EXIT, readingOnce, UsageError, type CliIo } from './io.js';
 
 export const EXTRACT_HELP = `Usage: comove extract FILE… [--json]
 
@@ -50,16 +50,8 @@ export function runExtract(argv: string[], io: CliIo): number {
     return EXIT.ok;
   }
   if (positionals.length === 0) throw new UsageError('extract needs at least one file');
-  // Every file is read once: the text that was extracted is also the one positions are counted in.
-  const texts = new Map<string, string>();
-  const remembering: CliIo = {
-    ...io,
-    readFile: (path) => {
-      const text = texts.get(path) ?? io.readFile(path);
-      texts.set(path, text);
-      return text;
-    },
-  };
+  // Every file is read once; positions are counted in the text that was extracted (FileExtraction.text).
+  const remembering = readingOnce(io);
   const resolver = fileResolver(remembering);
   const files: FileExtraction[] = [];
   for (const path of positionals) {
@@ -71,8 +63,8 @@ export function runExtract(argv: string[], io: CliIo): number {
     }
     files.push(...extractProject({ uri: path, text }, resolver).files);
   }
-  if (values.json) io.stdout(JSON.stringify({ files: files.map((f) => fileJson(f, texts.get(f.uri)!)) }, null, 1) + '\n');
-  else io.stdout(files.map((f) => fileText(f, texts.get(f.uri)!)).join('\n'));
+  if (values.json) io.stdout(JSON.stringify({ files: files.map((f) => fileJson(f, f.text)) }, null, 1) + '\n');
+  else io.stdout(files.map((f) => fileText(f, f.text)).join('\n'));
   return EXIT.ok;
 }
 

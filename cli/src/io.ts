@@ -17,3 +17,16 @@ export class UsageError extends Error {}
 
 /** Exit codes shared by every command. */
 export const EXIT = { ok: 0, inconsistent: 1, usage: 2 } as const;
+
+/** The same io, reading each file at most once (a project's files are asked for again by the include resolver). */
+export function readingOnce(io: CliIo): CliIo {
+  const texts = new Map<string, string>();
+  return {
+    ...io,
+    readFile: (path) => {
+      let text = texts.get(path);
+      if (text === undefined) texts.set(path, (text = io.readFile(path)));
+      return text;
+    },
+  };
+}

@@ -8,14 +8,9 @@
 import * as vscode from 'vscode';
 import { LanguageClient, TransportKind, type LanguageClientOptions, type ServerOptions } from 'vscode-languageclient/node';
 import { chartPage } from './views/chartPage.js';
-import { groupClaims, statusText, type ClaimGroup, type ClaimSummary } from './views/claimTree.js';
+import type { DocumentClaimsResult as DocumentClaims, MigrateResult } from '../../server/src/protocol.js';
+import { groupClaims, statusText, type ClaimGroup } from './views/claimTree.js';
 
-interface DocumentClaims {
-  uri: string;
-  parameters: { text: string; origin: string } | null;
-  claims: ClaimSummary[];
-  charts: Parameters<typeof chartPage>[2];
-}
 
 const PRESET_NAMES = ['planck-2018', 'planck-2018-cmb', 'planck-2015', 'wmap-9', 'flat-70-0.3'];
 let client: LanguageClient | undefined;
@@ -117,12 +112,12 @@ export async function activate(context: vscode.ExtensionContext): Promise<void> 
   refreshSoon();
 
   const migrate = async (doc: vscode.TextDocument, to: string) => {
-    const result = await client!.sendRequest<{ edit?: unknown; notRewritten?: number; error?: string }>('comove/migrate', { uri: doc.uri.toString(), to });
-    if (result.error || !result.edit) {
-      void vscode.window.showErrorMessage(`Comove: ${result.error ?? 'nothing to migrate'}`);
+    const result = await client!.sendRequest<MigrateResult>('comove/migrate', { uri: doc.uri.toString(), to });
+    if ('error' in result) {
+      void vscode.window.showErrorMessage(`Comove: ${result.error}`);
       return;
     }
-    const edit = await client!.protocol2CodeConverter.asWorkspaceEdit(result.edit as Parameters<LanguageClient['protocol2CodeConverter']['asWorkspaceEdit']>[0]);
+    const edit = await client!.protocol2CodeConverter.asWorkspaceEdit(result.edit);
     if (edit && (await vscode.workspace.applyEdit(edit))) {
       void vscode.window.showInformationMessage(`Comove: rewritten for ${to}${result.notRewritten ? `; ${result.notRewritten} numbers could not be rewritten (see comove migrate on the command line for the list)` : ''}.`);
     }

@@ -13,6 +13,7 @@ import {
   type CodeAction,
   type Connection,
   type InitializeResult,
+  type GenericRequestHandler,
   type WorkspaceEdit,
 } from 'vscode-languageserver/node';
 import { TextDocument } from 'vscode-languageserver-textdocument';
@@ -32,6 +33,7 @@ import {
 } from '../../shared/src/index.js';
 import { claimActions, codeLensesOf, diagnosticsOf, documentSymbolsOf, hoverAt, inlayHintsOf, type DiagnosticData } from './convert.js';
 import { Projects } from './projects.js';
+import type { DocumentClaimsResult, MigrateResult } from './protocol.js';
 import { DEFAULT_SETTINGS, defaultParameterInput, readSettings, type ComoveSettings } from './settings.js';
 
 export const SERVER_VERSION = '0.1.0';
@@ -44,25 +46,6 @@ interface FileResult {
   /** Version of the open document it was computed from (null: read from disk). */
   readonly version: number | null;
   readonly root: string;
-}
-
-/** The claims of a document for the client's views (`comove/documentClaims`). */
-export interface DocumentClaimsResult {
-  readonly uri: string;
-  readonly parameters: { readonly text: string; readonly origin: string } | null;
-  readonly claims: ReadonlyArray<{
-    readonly range: { start: { line: number; character: number }; end: { line: number; character: number } };
-    readonly kind: string;
-    readonly title: string;
-    readonly z: number | null;
-    readonly stated: string;
-    readonly unit: string;
-    readonly computed: number | null;
-    readonly status: string;
-    readonly slip: string | null;
-    readonly reason: string | null;
-  }>;
-  readonly charts: ReturnType<typeof chartData>;
 }
 
 export function startServer(connection: Connection): void {
@@ -291,7 +274,7 @@ export function startServer(connection: Connection): void {
   });
 
   /** The workspace edit of a migration of the project `uri` belongs to. */
-  const migrationEdit = (uri: string, to: string): { edit: WorkspaceEdit; notRewritten: number } | { error: string } => {
+  const migrationEdit = (uri: string, to: string): MigrateResult => {
     const parsed = parseParameterText(to);
     if (parsed.problems.length) return { error: parsed.problems.map((p) => p.message).join('; ') };
     const r = resultFor(uri);
@@ -344,7 +327,8 @@ export function startServer(connection: Connection): void {
     return process.memoryUsage().heapUsed;
   });
 
-  connection.onRequest('comove/migrate', (params: { uri: string; to: string }): { edit?: WorkspaceEdit; notRewritten?: number; error?: string } => migrationEdit(params.uri, params.to));
+  const migrateHandler: GenericRequestHandler<MigrateResult, void> = (params: { uri: string; to: string }) => migrationEdit(params.uri, params.to);
+  connection.onRequest('comove/migrate', migrateHandler);
 
   documents.listen(connection);
   connection.listen();

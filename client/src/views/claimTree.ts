@@ -3,18 +3,9 @@
  * label, a description and the position to reveal. Pure: the extension turns it into tree items.
  */
 
-export interface ClaimSummary {
-  readonly range: { start: { line: number; character: number }; end: { line: number; character: number } };
-  readonly kind: string;
-  readonly title: string;
-  readonly z: number | null;
-  readonly stated: string;
-  readonly unit: string;
-  readonly computed: number | null;
-  readonly status: string;
-  readonly slip: string | null;
-  readonly reason: string | null;
-}
+import type { ClaimSummary } from '../../../server/src/protocol.js';
+
+export type { ClaimSummary };
 
 export interface ClaimGroup {
   readonly status: 'inconsistent' | 'unchecked' | 'consistent';

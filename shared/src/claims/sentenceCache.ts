@@ -45,12 +45,41 @@ function move(r: SentenceReading, d: number): SentenceReading {
   };
 }
 
+/** A map that keeps what was used in the current run and the one before: older entries go. */
+class RecentMap<V> {
+  private current = new Map<string, V>();
+  private previous = new Map<string, V>();
+
+  take(key: string): V | undefined {
+    let v = this.current.get(key);
+    if (v === undefined) {
+      v = this.previous.get(key);
+      if (v !== undefined) {
+        this.previous.delete(key);
+        this.current.set(key, v);
+      }
+    }
+    return v;
+  }
+
+  put(key: string, v: V): void {
+    this.current.set(key, v);
+  }
+
+  endRun(): void {
+    this.previous = this.current;
+    this.current = new Map();
+  }
+
+  get size(): number {
+    return this.current.size + this.previous.size;
+  }
+}
+
 export class SentenceCache {
-  private current = new Map<string, { start: number; reading: SentenceReading }>();
-  private previous = new Map<string, { start: number; reading: SentenceReading }>();
+  private readonly readings = new RecentMap<{ start: number; reading: SentenceReading }>();
   /** Numbers of other spans (table cells, declaration sentences), kept the same way. */
-  private currentNumbers = new Map<string, { start: number; numbers: readonly StatedNumber[] }>();
-  private previousNumbers = new Map<string, { start: number; numbers: readonly StatedNumber[] }>();
+  private readonly numbers = new RecentMap<{ start: number; numbers: readonly StatedNumber[] }>();
   private hitCount = 0;
   private missCount = 0;
 
@@ -61,14 +90,7 @@ export class SentenceCache {
 
   /** The reading of a sentence with this key, moved to `start`, or null. */
   take(key: string, start: number): SentenceReading | null {
-    let entry = this.current.get(key);
-    if (!entry) {
-      entry = this.previous.get(key);
-      if (entry) {
-        this.previous.delete(key);
-        this.current.set(key, entry);
-      }
-    }
+    const entry = this.readings.take(key);
     if (!entry) {
       this.missCount++;
       return null;
@@ -78,38 +100,29 @@ export class SentenceCache {
   }
 
   put(key: string, start: number, reading: SentenceReading): void {
-    this.current.set(key, { start, reading });
+    this.readings.put(key, { start, reading });
   }
 
   /** The numbers of a span with this key, moved to `start`, or null. */
   takeNumbers(key: string, start: number): readonly StatedNumber[] | null {
-    let entry = this.currentNumbers.get(key);
-    if (!entry) {
-      entry = this.previousNumbers.get(key);
-      if (entry) {
-        this.previousNumbers.delete(key);
-        this.currentNumbers.set(key, entry);
-      }
-    }
+    const entry = this.numbers.take(key);
     if (!entry) return null;
     const d = start - entry.start;
     return d === 0 ? entry.numbers : entry.numbers.map((n) => moveNumber(n, d));
   }
 
   putNumbers(key: string, start: number, numbers: readonly StatedNumber[]): void {
-    this.currentNumbers.set(key, { start, numbers });
+    this.numbers.put(key, { start, numbers });
   }
 
   /** Ends a run: what was not used in it is forgotten. */
   endRun(): void {
-    this.previous = this.current;
-    this.current = new Map();
-    this.previousNumbers = this.currentNumbers;
-    this.currentNumbers = new Map();
+    this.readings.endRun();
+    this.numbers.endRun();
   }
 
   /** Hits and misses of the last run (for tests and benchmarks). */
   get stats(): { hits: number; misses: number; size: number } {
-    return { hits: this.hitCount, misses: this.missCount, size: this.previous.size + this.current.size };
+    return { hits: this.hitCount, misses: this.missCount, size: this.readings.size };
   }
 }
