@@ -74,18 +74,27 @@ export function startServer(connection: Connection): void {
    * save, on a configuration change, and once typing has paused for FULL_AFTER_IDLE_MS.
    */
   const analyse = (root: string, full = true) => {
+    try {
+      analyseProject(root, full);
+    } catch (e) {
+      // A bug in the core must not take the server (and the user's session) down: report it on the file.
+      connection.console.error(`comove: checking ${root} failed: ${(e as Error).stack ?? e}`);
+      const doc = documents.get(root);
+      void connection.sendDiagnostics({
+        uri: root,
+        version: doc?.version,
+        diagnostics: [{ range: { start: { line: 0, character: 0 }, end: { line: 0, character: 0 } }, severity: 2, source: 'comove', message: `Comove could not check this file (internal error: ${(e as Error).message}); the text is untouched` }],
+      });
+    }
+  };
+
+  const analyseProject = (root: string, full: boolean) => {
     const text = projects.read(root);
     if (text === null) return;
     projects.forgetRoot(root);
     const fallback = defaultParameterInput(settings);
     settingsProblem = fallback.problem;
-    let files: readonly FileExtraction[];
-    try {
-      files = extractProject({ uri: root, text }, (from, path) => projects.resolve(from, path), { sentenceCache }).files;
-    } catch (e) {
-      connection.console.error(`comove: reading ${root} failed: ${(e as Error).stack ?? e}`);
-      return;
-    }
+    const files = extractProject({ uri: root, text }, (from, path) => projects.resolve(from, path), { sentenceCache }).files;
     projects.learn(root, files.map((f) => f.uri));
     const checks = checkProject(files, { relativeFloor: settings.relativeFloor / 100, cache, fallback: fallback.input, fitAuthorCosmology: full });
     for (const check of checks) {

@@ -211,6 +211,19 @@ describe('language server over stdio', () => {
     expect(last.params.version).toBe(version);
   }, 60_000);
 
+  it('survives bad input: binary text, unbalanced math and braces, a huge line', async () => {
+    const binary = uriOf('binary.tex');
+    await client.open(binary, 'latex', 'PK\u0003\u0004\u0000\u0000garbage\u0000');
+    expect((await client.diagnostics(binary, (p) => p.diagnostics.length > 0)).diagnostics[0].message).toMatch(/binary file/);
+    const broken = uriOf('broken.tex');
+    await client.open(broken, 'latex', '% comove: flat-70-0.3\nAt $z = 0.48 the luminosity distance is {2.70\\,Gpc.\n\n' + 'x'.repeat(200_000) + '\n');
+    const p = await client.diagnostics(broken, (x) => x.diagnostics.length > 0);
+    expect(p.diagnostics.some((d) => /unbalanced|not closed/.test(d.message))).toBe(true);
+    // The server still answers.
+    const hover = await client.connection.sendRequest(HoverRequest.type, { textDocument: { uri: broken }, position: { line: 1, character: 3 } });
+    expect(hover === null || typeof hover === 'object').toBe(true);
+  });
+
   it('shuts down cleanly', async () => {
     expect(await client.shutdown()).toBe(0);
   });

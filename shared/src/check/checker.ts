@@ -94,7 +94,6 @@ function unchecked(claim: Claim, reason: string, parameters: ParameterChoice | n
 export function checkFile(file: FileExtraction, options: CheckOptions = {}): FileCheck {
   const cache = options.cache ?? new CosmologyCache();
   const floor = options.relativeFloor ?? DEFAULT_RELATIVE_FLOOR;
-  const text = file.reading.reading.text;
   const lineStarts = lineStartsOf(file.text);
   const withLine = (choice: ParameterChoice | null): ParameterChoice | null => {
     const d = choice?.declarations[0];
