@@ -218,7 +218,7 @@ describe('language server over stdio', () => {
     const broken = uriOf('broken.tex');
     await client.open(broken, 'latex', '% comove: flat-70-0.3\nAt $z = 0.48 the luminosity distance is {2.70\\,Gpc.\n\n' + 'x'.repeat(200_000) + '\n');
     const p = await client.diagnostics(broken, (x) => x.diagnostics.length > 0);
-    expect(p.diagnostics.some((d) => /unbalanced|not closed/.test(d.message))).toBe(true);
+    expect(p.diagnostics.some((d) => /unbalanced|not closed/.test(typeof d.message === 'string' ? d.message : d.message.value))).toBe(true);
     // The server still answers.
     const hover = await client.connection.sendRequest(HoverRequest.type, { textDocument: { uri: broken }, position: { line: 1, character: 3 } });
     expect(hover === null || typeof hover === 'object').toBe(true);

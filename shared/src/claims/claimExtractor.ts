@@ -50,6 +50,9 @@ export interface ClaimScan {
   readonly declarations: DeclarationScan;
 }
 
+/** How far before a number its cue may stand, in characters. */
+const CUE_REACH = 200;
+
 /** Contexts in which a number with a unit is not a cosmological claim. */
 const NOT_A_CLAIM = /parallax|Gaia|Milky Way|Galactic|nearby star|aperture|seeing|FWHM|PSF|pixel|slit|beam|wavelength|λ|strain|posterior|credible|gravitational[- ]wave|GW\d|H\s*II|\brest[- ]frame\b/i;
 /** What stands between an angle and the length it subtends: "1″ corresponds to", "the 3.2″ separation is", "0.4″ resolution … resolves". */
@@ -343,12 +346,16 @@ function readSentence(text: string, sentence: Sentence, numbers: StatedNumber[])
       }
       // The cue nearest before the number (or just after it: "6.6 Gpc for the luminosity distance").
       let best: { kind: ClaimKind; distance: number } | null = null;
+      // Cues are looked for in the last CUE_REACH characters before the number: a cue farther
+      // away names something else (and scanning whole long sentences for every number was the
+      // slowest part of extraction).
+      const reach = before.length > CUE_REACH ? before.slice(before.length - CUE_REACH) : before;
+      const following = text.slice(n.unit!.end, Math.min(sentence.end, n.unit!.end + 40));
       for (const cue of KIND_CUES) {
         const volumeLike = cue.kind === 'comovingVolume' && dims.length === 3 && (dims.angle === 0 || dims.angle === -2);
         if (!volumeLike && !dimensionsMatch(cue.dimension, dims)) continue;
-        const endBefore = lastMatchEnd(cue.pattern, before);
-        const afterUnit = text.slice(n.unit!.end, Math.min(sentence.end, n.unit!.end + 40));
-        const distance = endBefore >= 0 ? before.length - endBefore : /^\s*(?:for|as|is) the /.test(afterUnit) && cue.pattern.test(afterUnit) ? 25 : -1;
+        const endBefore = lastMatchEnd(cue.pattern, reach);
+        const distance = endBefore >= 0 ? reach.length - endBefore : /^\s*(?:for|as|is) the /.test(following) && cue.pattern.test(following) ? 25 : -1;
         if (distance < 0) continue;
         if (!best || distance < best.distance) best = { kind: cue.kind, distance };
       }
