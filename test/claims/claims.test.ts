@@ -107,6 +107,9 @@ describe('notations seen in drafts', () => {
     [String.raw`The comoving volume to $z=2$ is $\approx 580\,h_{70}^{-3}$\,Gpc$^3$.`, [['comovingVolume', '580 h_70^-3 Gpc^3', 2]]],
     [String.raw`The Universe is 13.8~Gyr old, and at $z=6$ it was only $\sim 0.9$~Gyr old.`, [['ageToday', '13.8 Gyr', null], ['age', '0.9 Gyr', 6]]],
     [String.raw`at $z = 0.5$ ($D_L = 2.8$~Gpc; see Table~\ref{tab}) and at $z=1$ ($D_L = 6.6$~Gpc)`, [['luminosityDistance', '2.8 Gpc', 0.5], ['luminosityDistance', '6.6 Gpc', 1]]],
+    [String.raw`At redshift two the luminosity distance is 15.8\,Gpc.`, [['luminosityDistance', '15.8 Gpc', 2]]],
+    [String.raw`For an object at a redshift of about 1.9, $D_L = 14.6$\,Gpc.`, [['luminosityDistance', '14.6 Gpc', 1.9]]],
+    [String.raw`The comoving volume of the field to $z = 3$ is 1.2\,Gpc$^3$. Its luminosity distance is 2.70\,Gpc.`, [['comovingVolume', '1.2 Gpc^3', 3], ['luminosityDistance', '2.70 Gpc', null]]],
   ];
   for (const [src, expected] of cases) {
     it(src, () => {

@@ -1,6 +1,6 @@
 /**
  * Redshifts as stated in reading text: "z = 1.2", "z ≈ 2", "z_s = 2.1", "redshift of 0.5",
- * "redshifts 0.3 and 0.5", "1.5 < z < 2.5", "z = 2–3". Photometric-band uses ("z-band",
+ * "redshift of about 0.5", "redshift two", "redshifts 0.3 and 0.5", "1.5 < z < 2.5", "z = 2–3". Photometric-band uses ("z-band",
  * "m_z", "z = 21.3 mag") and the named epochs (z_eq, z_*, z_drag) are not redshifts of objects.
  */
 
@@ -22,7 +22,10 @@ export interface RedshiftMention {
 
 /** The z symbol with an optional object subscript, then a relation. Epoch subscripts are excluded. */
 const Z_SYMBOL = /(?<![A-Za-z_\\])z(?:_\{?[A-Za-z0-9,]{1,8}\}?)?\s*(=|≈|∼|~|≃|<|>|≲|≳|≤|≥)\s*/g;
-const REDSHIFT_WORD = /\bredshifts?\s*(?:of\s*|z\s*(?:=|≈|∼|~)\s*|(?:=|≈|∼|~)\s*|around\s*|about\s*)?/gi;
+const REDSHIFT_WORD = /\bredshifts?\s*(?:of\s*(?:about\s*|approximately\s*|around\s*|roughly\s*|nearly\s*|∼\s*|~\s*|≈\s*)?|z\s*(?:=|≈|∼|~)\s*|(?:=|≈|∼|~)\s*|around\s*|about\s*)?/gi;
+/** Redshifts written as words ("at redshift two"). */
+const NUMBER_WORDS: Readonly<Record<string, number>> = { one: 1, two: 2, three: 3, four: 4, five: 5, six: 6, seven: 7, eight: 8, nine: 9, ten: 10 };
+const NUMBER_WORD = /^(one|two|three|four|five|six|seven|eight|nine|ten)\b/i;
 const RANGE_FORM = /(\d*\.?\d+)\s*(<|≤|≲)\s*z\s*(<|≤|≲)\s*(\d*\.?\d+)/g;
 /** "between z = 2 and z = 3", "from z = 2 to 3". */
 const BETWEEN_FORM = /(?:between|from)\s+(?:redshifts?\s+|z\s*=\s*)(\d*\.?\d+)\s+(?:and|to)\s+(?:z\s*=\s*)?(\d*\.?\d+)/gi;
@@ -95,6 +98,14 @@ export function findRedshifts(text: string, from = 0, to = text.length, known?: 
     const at = from + m.index!;
     const n = numberAt(at + m[0].length);
     if (n) add(at, n);
+    else {
+      const word = NUMBER_WORD.exec(text.slice(at + m[0].length, Math.min(to, at + m[0].length + 6)));
+      const after = at + m[0].length;
+      if (word && !taken.has(after)) {
+        taken.add(after);
+        out.push({ value: NUMBER_WORDS[word[1].toLowerCase()], range: null, start: at, end: after + word[0].length, numberStart: after, list: [], listNumberStarts: [] });
+      }
+    }
   }
   return out.sort((a, b) => a.start - b.start);
 }
