@@ -70,6 +70,8 @@ describe('binding to a redshift', () => {
   it('binds table cells to the redshift in the table’s caption when the table has no z column', () => {
     const c = claimsOf('\\begin{table}\\caption{Distances of the pair at $z = 1.27$.}\\begin{tabular}{lc} Model & $D_A$ (Gpc) \\\\ round & 1.72 \\\\ \\end{tabular}\\end{table}');
     expect(c[0]).toMatchObject({ kind: 'angularDiameterDistance', text: '1.72', z: 1.27, zSource: 'caption' });
+    const captionUnits = claimsOf('\\begin{table}\\caption{The pair at $z = 1.27$; distances in Gpc, times in Gyr.}\\begin{tabular}{lcc} Model & $D_A$ & $t_{\\rm lb}$ \\\\ round & 1.72 & 8.9 \\\\ \\end{tabular}\\end{table}');
+    expect(captionUnits.map((x) => [x.kind, x.text, x.claim.value.unit?.text.trim(), x.z])).toEqual([['angularDiameterDistance', '1.72', 'Gpc', 1.27], ['lookbackTime', '8.9', 'Gyr', 1.27]]);
     const below = claimsOf('\\begin{table}\\begin{tabular}{lc} Model & $D_A$ (Gpc) \\\\ round & 1.72 \\\\ \\end{tabular}\\caption{Distances of the pair at $z = 1.27$.}\\end{table}');
     expect(below[0]).toMatchObject({ kind: 'angularDiameterDistance', text: '1.72', z: 1.27, zSource: 'caption' });
   });

@@ -95,6 +95,13 @@ describe('comove check', () => {
     expect(binary.stderr).toContain('binary');
   });
 
+  it('shows progress on a terminal, and only there', () => {
+    const files: Record<string, string> = {};
+    for (let i = 0; i < 5; i++) files[`many/p${i}.md`] = `<!-- comove: flat-70-0.3 -->\n\nAt $z = 0.48$ the luminosity distance is 2.70 Gpc.\n`;
+    expect(runWithFiles(['check', 'many'], files, { terminal: true }).stderr).toMatch(/checking 5\/5/);
+    expect(runWithFiles(['check', 'many'], files).stderr).toBe('');
+  });
+
   it('follows a LaTeX project from its root in a folder and checks the chapter under the root declaration', () => {
     const files = {
       'paper/main.tex': '\\documentclass{article}\n% comove: H0=70 Omega_m=0.3 flat\n\\begin{document}\n\\input{chapters/one}\n\\end{document}\n',

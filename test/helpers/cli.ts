@@ -1,7 +1,7 @@
 /** Runs the command line in-process with files from a map; returns exit code, output and the files written. */
 import { runCli } from '../../cli/src/run.js';
 
-export function runWithFiles(argv: string[], files: Record<string, string> = {}): { code: number; stdout: string; stderr: string; written: Record<string, string> } {
+export function runWithFiles(argv: string[], files: Record<string, string> = {}, options: { terminal?: boolean } = {}): { code: number; stdout: string; stderr: string; written: Record<string, string> } {
   let stdout = '';
   let stderr = '';
   const written: Record<string, string> = {};
@@ -27,6 +27,7 @@ export function runWithFiles(argv: string[], files: Record<string, string> = {})
     writeFile: (p, text) => {
       written[p] = text;
     },
+    stderrIsTerminal: options.terminal === true,
   });
   return { code, stdout, stderr, written };
 }

@@ -12,7 +12,7 @@ import { KIND_CUES, NEEDS_REDSHIFT, PURE_NUMBER_CUES, type ClaimKind } from './c
 import { findDeclarations, parameterStatements, type Declaration, type DeclarationScan } from './declarations.js';
 import { ARCSEC_RAD } from '../cosmology/constants.js';
 import type { Unit } from '../cosmology/units.js';
-import { findNumbers, unitAt, type StatedNumber } from './numberParser.js';
+import { findNumbers, unitAt, type StatedNumber, type StatedUnit } from './numberParser.js';
 import { findRedshifts, type RedshiftMention } from './redshifts.js';
 import { sentenceKey, type SentenceCache } from './sentenceCache.js';
 
@@ -446,6 +446,7 @@ function tableClaims(doc: DocumentReading, inSkip: (pos: number) => boolean, uni
   // caption read just before the table's first cell, or — for a caption set below the table —
   // just after its last cell, with nothing in between.
   const captionRedshift = new Map<number, number | null>();
+  const captionOf = new Map<number, (typeof doc.blocks)[number]>();
   const redshiftOf = (caption: (typeof doc.blocks)[number]) => {
     const mentions = findRedshifts(text, caption.start, caption.end);
     return mentions.length === 1 && !mentions[0].range && mentions[0].list.length === 0 ? mentions[0].value : null;
@@ -455,6 +456,7 @@ function tableClaims(doc: DocumentReading, inSkip: (pos: number) => boolean, uni
   for (const b of doc.blocks) {
     if (b.kind === 'caption') {
       if (lastTable !== null && (captionRedshift.get(lastTable) ?? null) === null) captionRedshift.set(lastTable, redshiftOf(b));
+      if (lastTable !== null && !captionOf.has(lastTable)) captionOf.set(lastTable, b);
       lastCaption = b;
       lastTable = null;
     } else if (b.kind === 'table-cell') {
@@ -462,11 +464,29 @@ function tableClaims(doc: DocumentReading, inSkip: (pos: number) => boolean, uni
       lastTable = id;
       if (captionRedshift.has(id)) continue;
       captionRedshift.set(id, lastCaption ? redshiftOf(lastCaption) : null);
+      if (lastCaption) captionOf.set(id, lastCaption);
     } else {
       lastCaption = null;
       lastTable = null;
     }
   }
+  /** Units a caption gives for its columns ("distances in Mpc, times in Gyr"). */
+  const captionUnits = new Map<number, StatedUnit[]>();
+  const unitsOfCaption = (table: number): StatedUnit[] => {
+    let list = captionUnits.get(table);
+    if (!list) {
+      list = [];
+      const caption = captionOf.get(table);
+      if (caption) {
+        for (const m of text.slice(caption.start, caption.end).matchAll(/\b(?:in|in units of)\s+/g)) {
+          const u = unitAt(text, caption.start + m.index! + m[0].length, units);
+          if (u?.unit) list.push(u);
+        }
+      }
+      captionUnits.set(table, list);
+    }
+    return list;
+  };
   const kindOfHeader = new Map<string, ClaimKind | null>();
   for (const c of cells) {
     const header = c.cell!.header;
@@ -478,7 +498,9 @@ function tableClaims(doc: DocumentReading, inSkip: (pos: number) => boolean, uni
     if (numbers.length !== 1) continue;
     const n = numbers[0];
     const unitText = /\(([^)]+)\)|\[([^\]]+)\]/.exec(header);
-    const unit = n.unit ?? (unitText ? unitAt(unitText[1] ?? unitText[2], 0, units) : null);
+    const wanted = KIND_CUES.find((k) => k.kind === headerKind)?.dimension ?? null;
+    const unit = n.unit ?? (unitText ? unitAt(unitText[1] ?? unitText[2], 0, units) : null) ??
+      unitsOfCaption(c.cell!.table).find((u) => dimensionsMatch(wanted, u.unit!.dimensions as unknown as Record<string, number>)) ?? null;
     const value: StatedNumber = unit && !n.unit ? { ...n, unit: { ...unit, start: c.start, end: c.start } } : n;
     const row = byRow.get(`${c.cell!.table}:${c.cell!.row}`) ?? [];
     const zCell = row.find((r) => r !== c && /^(?:z|z_\w+|redshift)\b/i.test((r.cell!.header ?? '').trim()));
