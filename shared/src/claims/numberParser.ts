@@ -81,11 +81,26 @@ const UNIT_WORDS: ReadonlyArray<[RegExp, string]> = [
   [/^kelvin\b/i, 'K'],
 ];
 
+/** First letters (lower case) of the unit words, to skip the word patterns at once. */
+const UNIT_WORD_INITIALS = new Set(['b', 'm', 't', 'l', 'y', 'p', 'd', 'a', 'k']);
+
 /** Tokens a unit expression may be made of (after symbols are normalised). */
 const UNIT_TOKEN = /(?:[hH](?:_?70)?|Gpc|Mpc|kpc|pc|Gyr|Myr|kyr|yr|Gly|Mly|kly|ly|km|cm|s|K|mK|mag|arcsec|arcmin|deg|rad|sr|Msun|M_⊙|M⊙|g|%|au|AU|eV|meV)(?:\s*\^\s*\{?\s*[-−+]?\d+\s*\}?|[⁻⁺]?[¹²³⁴⁵⁶⁷⁸⁹])?(?![A-Za-z0-9])/y;
 
 function normaliseExponent(s: string): string {
   return s.replace(/−/g, '-').replace(/[⁰¹²³⁴⁵⁶⁷⁸⁹⁻⁺]/g, (c) => SUPERSCRIPT_DIGITS[c]);
+}
+
+/** The first character at or after `pos` that is not a space (regular-expression guards: most numbers are followed by none of the forms). */
+function nextNonSpace(text: string, pos: number): string {
+  while (pos < text.length && /\s/.test(text[pos])) pos++;
+  return pos < text.length ? text[pos] : '';
+}
+
+/** The last character before `pos` that is not a space. */
+function nextNonSpaceBefore(text: string, pos: number): string {
+  while (pos > 0 && /\s/.test(text[pos - 1])) pos--;
+  return pos > 0 ? text[pos - 1] : '';
 }
 
 function matchAt(re: RegExp, text: string, pos: number): RegExpExecArray | null {
@@ -95,17 +110,35 @@ function matchAt(re: RegExp, text: string, pos: number): RegExpExecArray | null 
 
 /** Significant digits and the place value of the last one, for a mantissa as written. */
 export function precisionOf(mantissa: string): { significantDigits: number; resolution: number } {
-  const m = mantissa.replace(/,/g, '');
-  const [intPart, fracPart = ''] = m.split('.');
-  if (m.includes('.')) {
-    const digits = (intPart.replace(/^0+/, '') + fracPart).replace(/^0+/, '');
-    return { significantDigits: Math.max(1, digits.length), resolution: Number(`1e-${fracPart.length}`) };
+  // Digits only (thousands separators dropped), and where the decimal point was.
+  let digits = 0;
+  let leadingZeros = 0;
+  let seenNonZero = false;
+  let dot = -1;
+  let trailingZeros = 0;
+  for (let i = 0; i < mantissa.length; i++) {
+    const c = mantissa.charCodeAt(i);
+    if (c === 46) {
+      dot = digits;
+      continue;
+    }
+    if (c < 48 || c > 57) continue; // ','
+    digits++;
+    if (c === 48) {
+      if (!seenNonZero) leadingZeros++;
+      trailingZeros++;
+    } else {
+      seenNonZero = true;
+      trailingZeros = 0;
+    }
+  }
+  if (dot >= 0) {
+    // With a decimal point every digit after the first non-zero one counts (6.60 has three).
+    return { significantDigits: Math.max(1, digits - leadingZeros), resolution: Number(`1e-${digits - dot}`) };
   }
   // An integer: trailing zeros are not taken as significant (6600 is stated to the hundred).
-  const trimmed = intPart.replace(/^0+(?=\d)/, '');
-  const trailing = /0*$/.exec(trimmed)![0].length;
-  const sig = trimmed === '0' ? 1 : trimmed.length - trailing;
-  return { significantDigits: Math.max(1, sig), resolution: trimmed === '0' ? 1 : 10 ** trailing };
+  if (!seenNonZero) return { significantDigits: 1, resolution: 1 };
+  return { significantDigits: Math.max(1, digits - leadingZeros - trailingZeros), resolution: 10 ** trailingZeros };
 }
 
 /** Last characters of the relations, to rule most positions out at once. */
@@ -135,9 +168,11 @@ export function unitAt(text: string, pos: number, cache?: Map<string, Unit | nul
   // Units start with a letter or one of a few symbols; anything else rules a unit out at once.
   if (p >= text.length || !/[A-Za-z%″′°^'∘μ⊙]/.test(text[p])) return null;
   const rest = text.slice(p, p + 40);
-  for (const [re, spelled] of UNIT_WORDS) {
-    const m = re.exec(rest);
-    if (m) return { text: m[0], start: p, end: p + m[0].length, unit: spelled === '%' ? null : okUnit(spelled) };
+  if (UNIT_WORD_INITIALS.has(text[p].toLowerCase())) {
+    for (const [re, spelled] of UNIT_WORDS) {
+      const m = re.exec(rest);
+      if (m) return { text: m[0], start: p, end: p + m[0].length, unit: spelled === '%' ? null : okUnit(spelled) };
+    }
   }
   // Symbol units right after the number: ″ ′ ° (1.5″, 10°), also as superscripts (1.0^′′).
   const mark = /^\^*\s*(″|′′|''|′|°|∘)/.exec(rest);
@@ -260,7 +295,8 @@ function parseNumberAt(text: string, p: number, to: number, unitCache?: Map<stri
   let mantissaText: string;
   let digitsEnd: number;
   let precision: { significantDigits: number; resolution: number };
-  const power = matchAt(POWER_OF_TEN, text, p);
+  // A bare power of ten starts with "10" and a caret.
+  const power = text.charCodeAt(p) === 49 && text.charCodeAt(p + 1) === 48 ? matchAt(POWER_OF_TEN, text, p) : null;
   if (power && power.index === p) {
     const exponent = Number(normaliseExponent(power[1]));
     value = 10 ** exponent;
@@ -283,8 +319,9 @@ function parseNumberAt(text: string, p: number, to: number, unitCache?: Map<stri
     }
     value = Number(mantissaText.replace(/,/g, ''));
     precision = precisionOf(mantissaText);
-    const times = matchAt(TIMES_TEN, text, end);
-    const eNote = times ? null : matchAt(E_NOTATION, text, end);
+    const next = nextNonSpace(text, end);
+    const times = next === '×' || next === 'x' ? matchAt(TIMES_TEN, text, end) : null;
+    const eNote = times || (text[end] !== 'e' && text[end] !== 'E') ? null : matchAt(E_NOTATION, text, end);
     if (times) {
       const exponent = Number(normaliseExponent(times[1] ?? times[2]));
       value *= 10 ** exponent;
@@ -302,7 +339,8 @@ function parseNumberAt(text: string, p: number, to: number, unitCache?: Map<stri
 
   // Uncertainty.
   let uncertainty: StatedNumber['uncertainty'] = null;
-  const pm = matchAt(PLUS_MINUS, text, end);
+  const after = nextNonSpace(text, end);
+  const pm = after === '±' || after === '+' || after === '\\' ? matchAt(PLUS_MINUS, text, end) : null;
   if (pm) {
     const err = matchAt(MANTISSA, text, end + pm[0].length);
     if (err) {
@@ -311,7 +349,7 @@ function parseNumberAt(text: string, p: number, to: number, unitCache?: Map<stri
       end += pm[0].length + err[0].length;
     }
   } else {
-    const asym = matchAt(ASYMMETRIC, text, end);
+    const asym = after === '^' || after === '_' ? matchAt(ASYMMETRIC, text, end) : null;
     if (asym) {
       const plus = Number(asym[1] ?? asym[4]);
       const minus = Number(asym[2] ?? asym[3]);
@@ -323,9 +361,9 @@ function parseNumberAt(text: string, p: number, to: number, unitCache?: Map<stri
   // Range: "1.5–2.5", "9 to 11", "between 9 and 11".
   let range: StatedNumber['range'] = null;
   const rel = relationBefore(text, start);
-  const between = /between\s*$/.test(text.slice(Math.max(0, start - 9), start));
+  const between = nextNonSpaceBefore(text, start) === 'n' && /between\s*$/.test(text.slice(Math.max(0, start - 9), start));
   if (!uncertainty) {
-    const dash = matchAt(RANGE_DASH, text, end);
+    const dash = after === '–' || after === '—' || after === '-' || after === '−' || after === 't' || after === 'a' ? matchAt(RANGE_DASH, text, end) : null;
     const word = dash ? dash[0].trim() : '';
     if (dash && (word !== 'and' || between) && (word !== '-' || !/\s/.test(dash[0]))) {
       const second = matchAt(MANTISSA, text, end + dash[0].length);
