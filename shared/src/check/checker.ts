@@ -6,6 +6,7 @@
  */
 
 import type { Claim } from '../claims/claimExtractor.js';
+import type { Declaration } from '../claims/declarations.js';
 import { lineColumn, lineStartsOf, type FileExtraction } from '../claims/extraction.js';
 import { CosmologyCache, type Cosmology } from '../cosmology/cosmology.js';
 import type { ParameterInput } from '../cosmology/parameters.js';
@@ -133,8 +134,17 @@ export function checkFile(file: FileExtraction, options: CheckOptions = {}): Fil
   let presets: ReturnType<typeof presetSets> | null = null;
   const slipSearch = { presets: () => (presets ??= presetSets(cache)) };
   const checks: ClaimCheck[] = [];
+  // One choice object per scoped declaration, so that sets are built once and claims under the same set share it.
+  const scopedChoices = new Map<Declaration, ParameterChoice | null>();
+  const scopedFor = (at: number): ParameterChoice | null => {
+    const found = scopedChoice(file.declarations, at, file.uri);
+    const d = found?.declarations[0];
+    if (!found || !d) return found;
+    if (!scopedChoices.has(d)) scopedChoices.set(d, withLine(found));
+    return scopedChoices.get(d)!;
+  };
   for (const claim of file.claims) {
-    const scoped = options.override ? null : withLine(scopedChoice(file.declarations, claim.start, file.uri));
+    const scoped = options.override ? null : scopedFor(claim.start);
     const choice = scoped ?? documentSet;
     if (claim.unchecked) {
       checks.push(unchecked(claim, claim.unchecked, choice));
