@@ -31,7 +31,7 @@ import {
   type FileExtraction,
   type LocatedCheck,
 } from '../../shared/src/index.js';
-import { claimActions, codeLensesOf, diagnosticsOf, documentSymbolsOf, hoverAt, inlayHintsOf, type DiagnosticData } from './convert.js';
+import { claimActions, claimAt, codeLensesOf, diagnosticsOf, documentSymbolsOf, hoverAt, inlayHintsOf, type DiagnosticData } from './convert.js';
 import { Projects } from './projects.js';
 import type { DocumentClaimsResult, MigrateResult } from './protocol.js';
 import { DEFAULT_SETTINGS, defaultParameterInput, readSettings, type ComoveSettings } from './settings.js';
@@ -179,7 +179,6 @@ export function startServer(connection: Connection): void {
         inlayHintProvider: true,
         codeLensProvider: { resolveProvider: false },
         documentSymbolProvider: true,
-        executeCommandProvider: { commands: [] },
         workspace: { workspaceFolders: { supported: true, changeNotifications: true } },
       },
       serverInfo: { name: 'comove', version: SERVER_VERSION },
@@ -191,8 +190,7 @@ export function startServer(connection: Connection): void {
       void connection.client.register(DidChangeConfigurationNotification.type, { section: 'comove' }).catch(() => undefined);
       await fetchSettings();
     }
-    connection.workspace.onDidChangeWorkspaceFolders((e) => {
-      void e;
+    connection.workspace.onDidChangeWorkspaceFolders(() => {
       void connection.workspace.getWorkspaceFolders().then((folders) => projects.setFolders((folders ?? []).map((f) => f.uri)));
     });
   });
@@ -250,7 +248,10 @@ export function startServer(connection: Connection): void {
     for (const d of params.context.diagnostics) {
       if (d.source !== 'comove') continue;
       const data = d.data as DiagnosticData | undefined;
-      if (data?.claimIndex !== undefined) actions.push(...claimActions(r.located, data.claimIndex, uri, languageId, [d]));
+      if (data?.claimIndex === undefined) continue;
+      // A diagnostic from an older version of the text: find its claim again by position.
+      const index = data.version === r.version ? data.claimIndex : claimAt(r.located, d.range.start)?.index;
+      if (index !== undefined) actions.push(...claimActions(r.located, index, uri, languageId, [d]));
     }
     const extraction = r.located.check.extraction;
     const start = params.range.start;
