@@ -435,12 +435,16 @@ function tableClaims(doc: DocumentReading, inSkip: (pos: number) => boolean, uni
   const text = doc.reading.text;
   const cells = doc.blocks.filter((b) => b.kind === 'table-cell' && b.cell);
   const out: Claim[] = [];
-  const byRow = new Map<string, typeof cells>();
+  // The redshift cell of each row ("z", "z_spec", "redshift" column), found once per row.
+  const zCellOfRow = new Map<string, (typeof cells)[number] | null>();
+  const isZHeader = new Map<string, boolean>();
   for (const c of cells) {
     const key = `${c.cell!.table}:${c.cell!.row}`;
-    const row = byRow.get(key);
-    if (row) row.push(c);
-    else byRow.set(key, [c]);
+    if (!zCellOfRow.has(key)) zCellOfRow.set(key, null);
+    const header = c.cell!.header ?? '';
+    let isZ = isZHeader.get(header);
+    if (isZ === undefined) isZHeader.set(header, (isZ = /^(?:z|z_\w+|redshift)\b/i.test(header.trim())));
+    if (isZ && zCellOfRow.get(key) === null) zCellOfRow.set(key, c);
   }
   // A table's caption may give the redshift of all its rows ("Distances at z = 0.5"): the
   // caption read just before the table's first cell, or — for a caption set below the table —
@@ -502,8 +506,8 @@ function tableClaims(doc: DocumentReading, inSkip: (pos: number) => boolean, uni
     const unit = n.unit ?? (unitText ? unitAt(unitText[1] ?? unitText[2], 0, units) : null) ??
       unitsOfCaption(c.cell!.table).find((u) => dimensionsMatch(wanted, u.unit!.dimensions as unknown as Record<string, number>)) ?? null;
     const value: StatedNumber = unit && !n.unit ? { ...n, unit: { ...unit, start: c.start, end: c.start } } : n;
-    const row = byRow.get(`${c.cell!.table}:${c.cell!.row}`) ?? [];
-    const zCell = row.find((r) => r !== c && /^(?:z|z_\w+|redshift)\b/i.test((r.cell!.header ?? '').trim()));
+    const rowZ = zCellOfRow.get(`${c.cell!.table}:${c.cell!.row}`) ?? null;
+    const zCell = rowZ !== c ? rowZ : null;
     const zNumbers = zCell ? numbersIn(zCell.start, zCell.end) : [];
     const fromCaption = zCell ? null : captionRedshift.get(c.cell!.table) ?? null;
     const z = zNumbers.length === 1 ? zNumbers[0].value : fromCaption;
