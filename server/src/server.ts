@@ -27,6 +27,7 @@ import {
   migrateFile,
   parseParameterText,
   PRESETS,
+  ReadingMemory,
   SentenceCache,
   type FileExtraction,
   type LocatedCheck,
@@ -56,6 +57,8 @@ export function startServer(connection: Connection): void {
   const cache = new CosmologyCache(32);
   /** Sentence readings per file, so that an edit re-reads only the sentences it touched. */
   const sentenceCaches = new Map<string, SentenceCache>();
+  /** Last readings of LaTeX files, patched after plain edits instead of read again. */
+  const readingMemory = new ReadingMemory();
   const sentenceCache = (uri: string) => {
     let c = sentenceCaches.get(uri);
     if (!c) sentenceCaches.set(uri, (c = new SentenceCache()));
@@ -94,7 +97,7 @@ export function startServer(connection: Connection): void {
     projects.forgetRoot(root);
     const fallback = defaultParameterInput(settings);
     settingsProblem = fallback.problem;
-    const files = extractProject({ uri: root, text }, (from, path) => projects.resolve(from, path), { sentenceCache }).files;
+    const files = extractProject({ uri: root, text }, (from, path) => projects.resolve(from, path), { sentenceCache, readingMemory }).files;
     projects.learn(root, files.map((f) => f.uri));
     const checks = checkProject(files, { relativeFloor: settings.relativeFloor / 100, cache, fallback: fallback.input, fitAuthorCosmology: full });
     for (const check of checks) {
@@ -211,6 +214,7 @@ export function startServer(connection: Connection): void {
     if (!r || r.root === e.document.uri || !documents.get(r.root)) {
       results.delete(e.document.uri);
       sentenceCaches.delete(e.document.uri);
+      readingMemory.forget(e.document.uri);
       void connection.sendDiagnostics({ uri: e.document.uri, diagnostics: [] });
     }
   });

@@ -1,18 +1,18 @@
 /**
- * The sentence cache changes nothing but speed: after any sequence of edits, extraction with the
- * cache gives exactly the claims of a fresh extraction, and an unchanged document is read from
- * the cache alone.
+ * The editor's caches change nothing but speed: after any sequence of edits, extraction with the
+ * sentence cache and the reading memory (patched LaTeX readings) gives exactly the claims of a
+ * fresh extraction, and an unchanged document is read from the caches alone.
  */
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { readFileSync } from 'node:fs';
-import { extractProject, SentenceCache, type Claim } from '../../shared/src/index.js';
+import { extractProject, ReadingMemory, SentenceCache, type Claim } from '../../shared/src/index.js';
 
 const ROOT = new URL('../../', import.meta.url).pathname;
 const FILES = ['examples/kestrel-survey.tex', 'examples/kestrel-proposal.md', 'test/fixtures/manuscripts/aas-lantern-survey.tex', 'test/fixtures/manuscripts/notations.tex'];
 
-function claims(uri: string, text: string, cache?: SentenceCache): unknown[] {
-  const f = extractProject({ uri, text }, () => null, cache ? { sentenceCache: () => cache } : {}).files[0];
+function claims(uri: string, text: string, cache?: SentenceCache, memory?: ReadingMemory): unknown[] {
+  const f = extractProject({ uri, text }, () => null, cache ? { sentenceCache: () => cache, readingMemory: memory } : {}).files[0];
   return f.claims.map((c: Claim) => ({ ...c, value: { ...c.value } }));
 }
 
@@ -25,13 +25,14 @@ describe('sentence cache', () => {
           fc.array(fc.tuple(fc.nat(), fc.constantFrom('', 'x', ' ', '0', '.', '\n\n', ' Gpc', ' z = 2', '$', '}', 'luminosity distance ')), { minLength: 1, maxLength: 6 }),
           (edits) => {
             const cache = new SentenceCache();
+            const memory = new ReadingMemory();
             let text = original;
-            claims(path, text, cache);
+            claims(path, text, cache, memory);
             for (const [at, insert] of edits) {
               const p = at % (text.length + 1);
               // An empty insert deletes a character instead.
               text = insert === '' ? text.slice(0, p) + text.slice(p + 1) : text.slice(0, p) + insert + text.slice(p);
-              expect(claims(path, text, cache)).toEqual(claims(path, text));
+              expect(claims(path, text, cache, memory)).toEqual(claims(path, text));
             }
           },
         ),

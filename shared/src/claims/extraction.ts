@@ -7,6 +7,7 @@
 
 import { unreadDocument, type DocumentFormat, type DocumentReading, type ReaderProblem } from '../reader/documentReading.js';
 import { readLatex, type MacroDefinition } from '../reader/latexScanner.js';
+import type { ReadingMemory } from '../reader/incrementalReading.js';
 import { readMarkdown } from '../reader/markdownReader.js';
 import { readPlainText } from '../reader/plainTextReader.js';
 import type { SentenceCache } from './sentenceCache.js';
@@ -53,14 +54,14 @@ export function formatOf(uri: string, text = ''): DocumentFormat {
 }
 
 /** Reads one file in the format its name says; binary and oversized files become a problem, not a crash. */
-export function readFile(file: SourceFile, format: DocumentFormat = formatOf(file.uri, file.text), macros: readonly MacroDefinition[] = []): DocumentReading & { macros?: readonly MacroDefinition[] } {
+export function readFile(file: SourceFile, format: DocumentFormat = formatOf(file.uri, file.text), macros: readonly MacroDefinition[] = [], memory?: ReadingMemory): DocumentReading & { macros?: readonly MacroDefinition[] } {
   if (file.text.length > MAX_FILE_CHARS) {
     return unreadDocument(format, `the file is too large to read (${(file.text.length / 1e6).toFixed(0)} MB; the limit is ${MAX_FILE_CHARS / 1024 / 1024} MB)`);
   }
   if (file.text.slice(0, 8192).includes('\u0000')) {
     return unreadDocument(format, 'this is a binary file, not a manuscript');
   }
-  if (format === 'latex') return readLatex(file.text, { macros });
+  if (format === 'latex') return memory ? memory.readLatex(file.uri, file.text, macros, () => readLatex(file.text, { macros })) : readLatex(file.text, { macros });
   if (format === 'markdown') return readMarkdown(file.text);
   return readPlainText(file.text);
 }
@@ -87,6 +88,8 @@ function extractFile(file: SourceFile, reading: DocumentReading, cache?: Sentenc
 export interface ExtractOptions {
   /** Sentence readings kept between calls, per file (an editor's; see sentenceCache.ts). */
   readonly sentenceCache?: (uri: string) => SentenceCache | undefined;
+  /** Last readings of LaTeX files, patched after small edits (an editor's; see incrementalReading.ts). */
+  readonly readingMemory?: ReadingMemory;
 }
 
 export function extractProject(root: SourceFile, resolve: IncludeResolver = () => null, options: ExtractOptions = {}): ProjectExtraction {
@@ -95,7 +98,7 @@ export function extractProject(root: SourceFile, resolve: IncludeResolver = () =
   const visit = (file: SourceFile, macros: readonly MacroDefinition[], depth: number) => {
     if (seen.has(file.uri)) return;
     seen.add(file.uri);
-    const reading = readFile(file, formatOf(file.uri, file.text), macros);
+    const reading = readFile(file, formatOf(file.uri, file.text), macros, options.readingMemory);
     const extraction = extractFile(file, reading, options.sentenceCache?.(file.uri));
     const problems = [...extraction.problems];
     files.push({ ...extraction, problems });

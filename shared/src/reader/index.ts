@@ -4,3 +4,4 @@ export * from './sourceMap.js';
 export { readLatex, siNumber, siUnit, type MacroDefinition, type LatexReadOptions } from './latexScanner.js';
 export { readMarkdown, frontMatterDeclaration } from './markdownReader.js';
 export { readPlainText } from './plainTextReader.js';
+export * from './incrementalReading.js';

@@ -185,10 +185,11 @@ class LatexScanner {
 
   // ---- output --------------------------------------------------------------------------
 
-  private emitCopy(start: number, end: number): void {
+  /** Copies source[start, end) verbatim; `plain` is false where the copy depends on what the text is (a siunitx number, a one-character argument). */
+  private emitCopy(start: number, end: number, plain = true): void {
     if (this.silent || end <= start) return;
     if (this.frame.span) this.store.replace(this.current.out, this.src.slice(start, end), this.frame.span.start, this.frame.span.end);
-    else this.store.copy(this.current.out, start, end);
+    else this.store.copy(this.current.out, start, end, plain);
   }
 
   private emit(text: string, start: number, end: number): void {
@@ -369,7 +370,7 @@ class LatexScanner {
       this.pos++;
       this.macro(this.pos - 1);
     } else {
-      this.emitCopy(this.pos, this.pos + 1);
+      this.emitCopy(this.pos, this.pos + 1, false);
       this.pos++;
     }
   }
@@ -917,7 +918,7 @@ class LatexScanner {
     const contentStart = end - 1 - raw.length;
     if (num === trimmed && trimmed && !this.frame.span && this.src.slice(contentStart, end - 1) === raw) {
       const lead = raw.length - raw.trimStart().length;
-      this.emitCopy(contentStart + lead, contentStart + lead + trimmed.length);
+      this.emitCopy(contentStart + lead, contentStart + lead + trimmed.length, false);
     } else this.emit(num, p, end);
     return end;
   }

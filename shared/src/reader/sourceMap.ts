@@ -35,8 +35,13 @@ const R_STR = 4;
 const R_STRIDE = 5;
 const VERBATIM = -1;
 const SPACE = -2;
+/** A verbatim copy the reader made only because of what it contains (a siunitx number): exact, but not to be patched. */
+const VERBATIM_FIXED = -3;
 
-// Map fields of ReadingText (stride 4): reading offset, source start, source end, exact (1) or not (0).
+// Map fields of ReadingText (stride 4): reading offset, source start, source end, and how the piece
+// maps: 1 a verbatim copy of plain text (characters map one to one; a plain edit inside it reads
+// the same), 2 a verbatim copy the reader chose for its content (one to one, but an edit may change
+// how it is read), 0 a replacement (every character maps to the whole source span).
 const M_OUT = 0;
 const M_START = 1;
 const M_END = 2;
@@ -94,8 +99,8 @@ export class OutputStore {
     d.length += len;
   }
 
-  /** Appends source[start, end) of the original source verbatim. */
-  copy(d: Draft, start: number, end: number): void {
+  /** Appends source[start, end) of the original source verbatim (`plain`: it would be copied whatever it contained). */
+  copy(d: Draft, start: number, end: number, plain = true): void {
     const s = this.source;
     // White space never doubles, and an output never starts with it.
     if (d.last === 0 || isBlankCode(d.last)) while (start < end && isBlankCode(s.charCodeAt(start))) start++;
@@ -112,12 +117,13 @@ export class OutputStore {
     const k = (this.count - 1) * R_STRIDE;
     const r = this.records;
     // A copy that continues the draft's previous verbatim piece extends it.
-    if (k >= 0 && r[k + R_DRAFT] === d.id && r[k + R_STR] === VERBATIM && r[k + R_END] === start) {
+    const kind = plain ? VERBATIM : VERBATIM_FIXED;
+    if (k >= 0 && r[k + R_DRAFT] === d.id && r[k + R_STR] === kind && r[k + R_END] === start) {
       r[k + R_END] = end;
       d.length += end - start;
       return;
     }
-    this.push(d, start, end, VERBATIM, end - start);
+    this.push(d, start, end, kind, end - start);
   }
 
   /** Appends `text` standing for source[start, end). */
@@ -156,7 +162,7 @@ export class OutputStore {
   /** The text of the record at field offset k. */
   private pieceText(k: number): string {
     const str = this.records[k + R_STR];
-    return str === VERBATIM ? this.source.slice(this.records[k + R_START], this.records[k + R_END]) : str === SPACE ? ' ' : this.strings[str];
+    return str === VERBATIM || str === VERBATIM_FIXED ? this.source.slice(this.records[k + R_START], this.records[k + R_END]) : str === SPACE ? ' ' : this.strings[str];
   }
 
   /** The text of one draft. */
@@ -224,9 +230,9 @@ export class OutputStore {
         map[m++] = draftStart + r[k + R_OUT];
         map[m++] = r[k + R_START];
         map[m++] = r[k + R_END];
-        map[m++] = str === VERBATIM ? 1 : 0;
+        map[m++] = str === VERBATIM ? 1 : str === VERBATIM_FIXED ? 2 : 0;
         offset = draftStart + r[k + R_OUT];
-        if (str === VERBATIM) {
+        if (str === VERBATIM || str === VERBATIM_FIXED) {
           const end = r[k + R_END];
           for (let i = r[k + R_START]; i < end; i++) units[offset++] = source.charCodeAt(i);
         } else if (str === SPACE) units[offset++] = 32;
@@ -270,7 +276,7 @@ export class ReadingText {
     const k = this.entryAt(out);
     if (k < 0) return 0;
     const c = this.map;
-    return c[k + M_EXACT] === 1 ? Math.min(c[k + M_START] + (out - c[k + M_OUT]), c[k + M_END]) : c[k + M_START];
+    return c[k + M_EXACT] !== 0 ? Math.min(c[k + M_START] + (out - c[k + M_OUT]), c[k + M_END]) : c[k + M_START];
   }
 
   /** Source offset just past the character before reading offset `outEnd`. */
@@ -279,7 +285,7 @@ export class ReadingText {
     const k = this.entryAt(outEnd - 1);
     if (k < 0) return 0;
     const c = this.map;
-    return c[k + M_EXACT] === 1 ? Math.min(c[k + M_START] + (outEnd - c[k + M_OUT]), c[k + M_END]) : c[k + M_END];
+    return c[k + M_EXACT] !== 0 ? Math.min(c[k + M_START] + (outEnd - c[k + M_OUT]), c[k + M_END]) : c[k + M_END];
   }
 
   /**
@@ -290,8 +296,40 @@ export class ReadingText {
     const c = this.map;
     for (let k = 0; k < c.length; k += M_STRIDE) {
       const outEnd = k + M_STRIDE < c.length ? c[k + M_STRIDE + M_OUT] : this.text.length;
-      visit(c[k + M_OUT], outEnd, c[k + M_START], c[k + M_END], c[k + M_EXACT] === 1);
+      visit(c[k + M_OUT], outEnd, c[k + M_START], c[k + M_END], c[k + M_EXACT] !== 0);
     }
+  }
+
+  /**
+   * For an edit of source[srcStart, srcEnd) that lies inside one verbatim piece (not at its first
+   * character): where the edit falls in the reading text. Null when the edit touches anything the
+   * reader transformed.
+   */
+  verbatimEditAt(srcStart: number, srcEnd: number): { at: number; atPieceEnd: boolean } | null {
+    const c = this.map;
+    for (let k = 0; k < c.length; k += M_STRIDE) {
+      if (c[k + M_EXACT] !== 1) continue;
+      if (c[k + M_START] < srcStart && srcEnd <= c[k + M_END]) return { at: c[k + M_OUT] + (srcStart - c[k + M_START]), atPieceEnd: srcEnd === c[k + M_END] };
+    }
+    return null;
+  }
+
+  /**
+   * This reading after replacing `removed` characters at reading offset `at` (source offset
+   * `srcAt`, inside a verbatim piece: see verbatimEditAt) by `inserted`, which stands for
+   * itself. Offsets after the edit move by the change in length.
+   */
+  withVerbatimEdit(at: number, srcAt: number, removed: number, inserted: string): ReadingText {
+    const delta = inserted.length - removed;
+    const text = this.text.slice(0, at) + inserted + this.text.slice(at + removed);
+    const c = Int32Array.from(this.map);
+    for (let k = 0; k < c.length; k += M_STRIDE) {
+      // The piece holding the edit starts before it, so only what follows moves.
+      if (c[k + M_OUT] >= at + removed) c[k + M_OUT] += delta;
+      if (c[k + M_START] >= srcAt + removed) c[k + M_START] += delta;
+      if (c[k + M_END] >= srcAt + removed) c[k + M_END] += delta;
+    }
+    return new ReadingText(text, c);
   }
 
   /** Source range [start, end) of the reading range [outStart, outEnd). */
