@@ -161,10 +161,11 @@ export function findDeclarations(
   // Prose.
   for (const s of doc.sentences) {
     const sentence = text.slice(s.start, s.end);
-    const cue = DECLARATION_CUE.test(sentence);
     // Only sentences with a parameter symbol, a cue or a named set can declare anything.
     if (!/[HΩωwTNΣ∑mh]|Omega|Planck|WMAP|⟦/.test(sentence)) continue;
-    const named = namedSet(sentence);
+    const cue = DECLARATION_CUE.test(sentence);
+    // Named sets need a name or a citation to stand on.
+    const named = /planck|wmap|komatsu|hinshaw|⟦/i.test(sentence) ? namedSet(sentence) : null;
     // Without a cue or a named set, only a sentence with two parameter statements declares
     // anything, and that takes two parameter symbols: most sentences stop here, unparsed.
     if (!cue && !named && countSymbols(sentence) < 2) continue;
