@@ -33,8 +33,8 @@ class ClaimsView implements vscode.TreeDataProvider<Node> {
   private groups: ClaimGroup[] = [];
   private uri: vscode.Uri | undefined;
 
-  async refresh(doc: vscode.TextDocument | undefined): Promise<void> {
-    const claims = await claimsOf(doc);
+  /** Shows the claims of `doc` (as the server returned them for the status bar: asked for once). */
+  show(doc: vscode.TextDocument | undefined, claims: DocumentClaims | null): void {
     this.uri = doc?.uri;
     this.groups = claims ? groupClaims(claims.claims) : [];
     this.changed.fire();
@@ -90,7 +90,7 @@ export async function activate(context: vscode.ExtensionContext): Promise<void> 
     const doc = manuscript(vscode.window.activeTextEditor);
     if (!doc) {
       status.hide();
-      await view.refresh(undefined);
+      view.show(undefined, null);
       return;
     }
     const claims = await claimsOf(doc);
@@ -98,7 +98,7 @@ export async function activate(context: vscode.ExtensionContext): Promise<void> 
     status.text = s.text;
     status.tooltip = s.tooltip;
     status.show();
-    await view.refresh(doc);
+    view.show(doc, claims);
   };
   let pending: NodeJS.Timeout | undefined;
   const refreshSoon = () => {

@@ -13,6 +13,7 @@ import {
   type CodeAction,
   type Connection,
   type InitializeResult,
+  type Range,
   type GenericRequestHandler,
   type WorkspaceEdit,
 } from 'vscode-languageserver/node';
@@ -23,6 +24,8 @@ import {
   CosmologyCache,
   extractProject,
   formatOf,
+  lineColumn,
+  lineStartsOf,
   locate,
   migrateFile,
   parseParameterText,
@@ -66,10 +69,9 @@ export function startServer(connection: Connection): void {
   };
   let settings: ComoveSettings = DEFAULT_SETTINGS;
   let canPullConfiguration = false;
-  let settingsProblem: string | null = null;
 
   const languageOf = (uri: string): string => documents.get(uri)?.languageId ?? ({ latex: 'latex', markdown: 'markdown', plaintext: 'plaintext' } as const)[formatOf(uri)];
-  const watched = (uri: string) => settings.languages.includes(languageOf(uri)) || languageOf(uri) === 'plaintext' && settings.languages.includes('plaintext');
+  const watched = (uri: string) => settings.languages.includes(languageOf(uri));
 
   /**
    * Checks the project a file belongs to and publishes diagnostics for every file of it. The fit
@@ -96,7 +98,6 @@ export function startServer(connection: Connection): void {
     if (text === null) return;
     projects.forgetRoot(root);
     const fallback = defaultParameterInput(settings);
-    settingsProblem = fallback.problem;
     const files = extractProject({ uri: root, text }, (from, path) => projects.resolve(from, path), { sentenceCache, readingMemory }).files;
     projects.learn(root, files.map((f) => f.uri));
     const checks = checkProject(files, { relativeFloor: settings.relativeFloor / 100, cache, fallback: fallback.input, fitAuthorCosmology: full });
@@ -107,7 +108,7 @@ export function startServer(connection: Connection): void {
       const located = locate(check);
       results.set(uri, { located, version, root });
       const diagnostics = diagnosticsOf(located, settings, uri, version);
-      if (settingsProblem) diagnostics.push({ range: { start: { line: 0, character: 0 }, end: { line: 0, character: 0 } }, severity: 2, source: 'comove', message: settingsProblem });
+      if (fallback.problem) diagnostics.push({ range: { start: { line: 0, character: 0 }, end: { line: 0, character: 0 } }, severity: 2, source: 'comove', message: fallback.problem });
       void connection.sendDiagnostics({ uri, version: version ?? undefined, diagnostics });
     }
   };
@@ -296,14 +297,15 @@ export function startServer(connection: Connection): void {
     const text = projects.read(r.root);
     if (text === null) return { error: 'the project root cannot be read' };
     const files = extractProject({ uri: r.root, text }, (from, path) => projects.resolve(from, path)).files;
-    const changes: Record<string, Array<{ range: ReturnType<LocatedCheck['sourceRange']>; newText: string }>> = {};
+    const changes: Record<string, Array<{ range: Range; newText: string }>> = {};
     let notRewritten = 0;
     for (const f of files) {
       const m = migrateFile(f, parsed.input, { cache, relativeFloor: settings.relativeFloor / 100 });
       if ('error' in m) return { error: m.error };
       notRewritten += m.notRewritten.length;
-      const located = results.get(f.uri)?.located ?? locate(checkProject([f], { cache })[0]);
-      if (m.edits.length) changes[f.uri] = m.edits.map((e) => ({ range: located.sourceRange(e.start, e.end), newText: e.newText }));
+      // Edits carry source offsets: positions need only the file's line starts.
+      const starts = lineStartsOf(f.text);
+      if (m.edits.length) changes[f.uri] = m.edits.map((e) => ({ range: { start: lineColumn(f.text, e.start, starts), end: lineColumn(f.text, e.end, starts) }, newText: e.newText }));
     }
     return { edit: { changes }, notRewritten };
   };

@@ -212,14 +212,16 @@ function checkClaim(
   let methodRelative = 0;
   let accuracy: string | null = null;
   let note: string | null = null;
-  if (claim.kind === 'densityParameter' || claim.kind === 'compositionPercentage') {
+  const question = questionOf(claim);
+  const algebraic = claim.kind === 'densityParameter' || claim.kind === 'compositionPercentage';
+  if (algebraic) {
     const d = claim.kind === 'densityParameter' ? declaredDensity(c.params, claim.parameter ?? '') : declaredPercentage(c.params, claim.parameter ?? '');
     if (typeof d === 'string') return unchecked(claim, d, choice);
     computed = d.value;
     formula = d.formula;
     source = 'the declared parameter set';
   } else {
-    const r = recompute(c, questionOf(claim));
+    const r = recompute(c, question);
     if (!r.ok) return unchecked(claim, r.reason, choice);
     computed = r.value;
     formula = r.formula;
@@ -235,8 +237,8 @@ function checkClaim(
   let fix: SourceEdit | null = null;
   let fixUnavailable: string | null = null;
   if (!j.consistent) {
-    if (withDiagnosis && claim.kind !== 'densityParameter' && claim.kind !== 'compositionPercentage') {
-      slip = diagnose({ cosmology: c, question: questionOf(claim), stated: n, interval, computed, floor: floorOf, neighbouringRedshifts: claim.sentenceRedshifts, presets: slipSearch.presets() });
+    if (withDiagnosis && !algebraic) {
+      slip = diagnose({ cosmology: c, question, stated: n, interval, computed, floor: floorOf, neighbouringRedshifts: claim.sentenceRedshifts, presets: slipSearch.presets() });
     }
     const edit = restate(file.reading, file.text, n, computed);
     if (typeof edit === 'string') fixUnavailable = edit;

@@ -61,8 +61,9 @@ export function migrateFile(file: FileExtraction, to: ParameterInput, options: O
   const made = cache.get(to);
   if (!made.ok) return { error: `the new parameters are not a valid set: ${made.errors.map((e) => `${e.parameter}: ${e.message}`).join('; ')}` };
   const resolvedCheck = made.cosmology.params;
-  const before = checkFile(file, { ...options, cache });
-  const after = checkFile(file, { ...options, cache, override: to });
+  // The author's-cosmology fit says nothing a migration uses.
+  const before = checkFile(file, { ...options, cache, fitAuthorCosmology: false });
+  const after = checkFile(file, { ...options, cache, override: to, fitAuthorCosmology: false });
   const edits: MigrationEdit[] = [];
   const notRewritten: NotRewritten[] = [];
   const text = file.reading.reading.text;
