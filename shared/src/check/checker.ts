@@ -136,8 +136,10 @@ export function checkFile(file: FileExtraction, options: CheckOptions = {}): Fil
   const checks: ClaimCheck[] = [];
   // One choice object per scoped declaration, so that sets are built once and claims under the same set share it.
   const scopedChoices = new Map<Declaration, ParameterChoice | null>();
+  const scopedDeclarations = file.declarations.filter((d) => d.role !== 'document');
   const scopedFor = (at: number): ParameterChoice | null => {
-    const found = scopedChoice(file.declarations, at, file.uri);
+    if (scopedDeclarations.length === 0) return null;
+    const found = scopedChoice(scopedDeclarations, at, file.uri);
     const d = found?.declarations[0];
     if (!found || !d) return found;
     if (!scopedChoices.has(d)) scopedChoices.set(d, withLine(found));

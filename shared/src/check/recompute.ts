@@ -116,9 +116,13 @@ function fromEpoch(e: EpochValue, q: ClaimQuestion, c: Cosmology, methodRelative
  * slip search and the fit ask again).
  */
 export function recompute(c: Cosmology, q: ClaimQuestion): Recomputation {
-  const memo = c.memo('recompute', () => new Map<string, Recomputation>());
-  const key = `${q.kind}|${q.z}|${q.zRange}|${q.angleArcsec}|${q.sinceEpoch}|${q.parameter}|${q.unit ? q.unit.text : ''}`;
-  let r = memo.get(key);
+  const memo = c.memo('recompute', () => new RecomputeMemo());
+  // The common question (a kind at one redshift, in a unit) is looked up without building a key:
+  // a keystroke in the editor asks for every claim of the document again.
+  const simple = q.zRange === null && q.angleArcsec === null && q.sinceEpoch === null && q.parameter === null;
+  const byZ = simple ? memo.simpleFor(q.kind, q.unit ? q.unit.text : '') : null;
+  const key = simple ? '' : `${q.kind}|${q.z}|${q.zRange}|${q.angleArcsec}|${q.sinceEpoch}|${q.parameter}|${q.unit ? q.unit.text : ''}`;
+  let r = byZ ? byZ.get(q.z) : memo.other.get(key);
   if (!r) {
     try {
       r = recomputeUnchecked(c, q);
@@ -126,9 +130,27 @@ export function recompute(c: Cosmology, q: ClaimQuestion): Recomputation {
       if (!(e instanceof CosmologyRangeError)) throw e;
       r = { ok: false, reason: e.message };
     }
-    if (memo.size < 100_000) memo.set(key, r);
+    if (memo.size++ < 100_000) {
+      if (byZ) byZ.set(q.z, r);
+      else memo.other.set(key, r);
+    }
   }
   return r;
+}
+
+/** Recomputations kept for one parameter set: simple questions by kind, unit and redshift; the rest by a key. */
+class RecomputeMemo {
+  readonly other = new Map<string, Recomputation>();
+  private readonly simple = new Map<string, Map<string, Map<number | null, Recomputation>>>();
+  size = 0;
+
+  simpleFor(kind: string, unit: string): Map<number | null, Recomputation> {
+    let byUnit = this.simple.get(kind);
+    if (!byUnit) this.simple.set(kind, (byUnit = new Map()));
+    let byZ = byUnit.get(unit);
+    if (!byZ) byUnit.set(unit, (byZ = new Map()));
+    return byZ;
+  }
 }
 
 function needZ(q: ClaimQuestion): number | string {

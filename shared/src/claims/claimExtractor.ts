@@ -7,14 +7,14 @@
  * `unchecked` with the reason: better than a wrong binding.
  */
 
-import type { DocumentReading, Sentence } from '../reader/documentReading.js';
+import type { Block, DocumentReading, Sentence } from '../reader/documentReading.js';
 import { KIND_CUES, NEEDS_REDSHIFT, PURE_NUMBER_CUES, type ClaimKind } from './claimKinds.js';
 import { findDeclarations, parameterStatements, type Declaration, type DeclarationScan } from './declarations.js';
 import { ARCSEC_RAD } from '../cosmology/constants.js';
 import type { Unit } from '../cosmology/units.js';
 import { findNumbers, unitAt, type StatedNumber, type StatedUnit } from './numberParser.js';
 import { findRedshifts, type RedshiftMention } from './redshifts.js';
-import { sentenceKey, type SentenceCache } from './sentenceCache.js';
+import type { SentenceCache } from './sentenceCache.js';
 
 export type RedshiftSource = 'sentence' | 'respectively' | 'previous-sentence' | 'table-row' | 'caption' | 'epoch';
 
@@ -93,23 +93,22 @@ function dimensionsMatch(want: Partial<Record<string, number>> | null, got: Reco
 
 /** Extracts the claims of a document. Never throws. */
 export function extractClaims(doc: DocumentReading, cache?: SentenceCache): ClaimScan {
-  cache?.beginRun();
+  cache?.beginRun(doc.reading.text);
   const units = new Map<string, Unit | null>();
   // Numbers of a span, parsed once: declarations, claims and table rows all ask for them.
   const parsed = new Map<number, { to: number; numbers: StatedNumber[] }>();
   const numbersIn = (from: number, to: number): StatedNumber[] => {
     const hit = parsed.get(from);
     if (hit && hit.to === to) return hit.numbers;
-    const key = cache ? `n${sentenceKey(doc.reading.text, { start: from, end: to })}` : '';
-    let numbers = cache?.takeNumbers(key, from) as StatedNumber[] | null;
+    let numbers = cache?.takeNumbers(from, to) as StatedNumber[] | null;
     if (!numbers) {
       numbers = findNumbers(doc.reading.text, from, to, units);
-      cache?.putNumbers(key, from, numbers);
+      cache?.putNumbers(from, to, numbers);
     }
     parsed.set(from, { to, numbers });
     return numbers;
   };
-  const declarations = findDeclarations(doc, units, numbersIn);
+  const declarations = findDeclarations(doc, units, numbersIn, cache ? (s, read) => cache.declarationOf(s.start, s.end, read) : undefined);
   const text = doc.reading.text;
   const claims: Claim[] = [];
   const skips = [...declarations.skips].sort((a, b) => a.start - b.start);
@@ -118,7 +117,7 @@ export function extractClaims(doc: DocumentReading, cache?: SentenceCache): Clai
   const inDeclaration = (pos: number) => inRanges(declared, pos);
   let blockIndex = 0;
 
-  let previous: { sentence: Sentence; mentions: readonly RedshiftMention[] } | null = null;
+  let previous: SentenceReading | null = null;
   /** Redshifts of named objects ("LDS-B1 lies at z = 0.512"), for later sentences that name them again. */
   const objectRedshifts = new Map<string, number>();
   /** The one redshift the paragraph is about so far, if it has named exactly one. */
@@ -128,12 +127,23 @@ export function extractClaims(doc: DocumentReading, cache?: SentenceCache): Clai
     const block = doc.blocks[blockIndex];
     if (context && context.block !== block) context = null;
     if (block && block.kind === 'table-cell') continue; // table cells are read by the table pass
-    const key = cache ? sentenceKey(text, sentence) : '';
-    let read = cache?.take(key, sentence.start) ?? null;
+    let read = cache?.take(sentence.start, sentence.end) ?? null;
     if (!read) {
       read = readSentence(text, sentence, numbersIn(sentence.start, sentence.end));
-      cache?.put(key, sentence.start, read);
+      cache?.put(sentence.start, sentence.end, read);
     }
+    if (read.found.length > 0) bindClaims(read, sentence);
+    previous = read;
+    // A limit ("the volume to z = 3") says nothing about where the paragraph's objects are.
+    if (!read.anchored) continue;
+    if (read.redshifts.length === 1 && !read.hasRange) {
+      context = { block, z: read.redshifts[0] };
+      for (const name of read.objects) objectRedshifts.set(name, read.redshifts[0]);
+    } else if (read.redshifts.length > 1 || read.hasRange) context = null;
+  }
+
+  /** Binds the claims a sentence reading found to their redshifts. */
+  function bindClaims(read: SentenceReading, sentence: Sentence): void {
     const mentions = read.mentions;
     const sentenceText = text.slice(sentence.start, sentence.end);
     const found = read.found.filter((f) => !inSkip(f.start) && !inDeclaration(f.start));
@@ -145,9 +155,9 @@ export function extractClaims(doc: DocumentReading, cache?: SentenceCache): Clai
     // Ordered pairing: "…, respectively", or as many claims of one kind as redshifts ("at z = 0.3
     // and z = 0.5 … 4.4 and 6.1 kpc … at each redshift").
     const sameKind = needing.length > 1 && needing.every((f) => f.kind === needing[0].kind);
-    const respectively = flat.length > 1 && flat.length === needing.length && (/respectively|\beach\b/i.test(sentenceText) || sameKind);
+    const respectively = flat.length > 1 && flat.length === needing.length && (read.saysRespectively || sameKind);
     // Epochs stated as redshifts in this sentence ("recombination at z_* ≈ 1090, when the universe was 372,000 years old").
-    const sentenceRedshifts = [...new Set(flat.filter((m) => !m.range).map((m) => m.value))];
+    const sentenceRedshifts = read.redshifts;
     const epochRedshifts = found.filter((f) => f.kind === 'recombination' || f.kind === 'matterRadiationEquality' || f.kind === 'dragEpoch' || f.kind === 'accelerationOnset');
     for (const f of found) {
       let z: number | null = null;
@@ -192,20 +202,20 @@ export function extractClaims(doc: DocumentReading, cache?: SentenceCache): Clai
           z = epoch.value.value;
           zSource = 'epoch';
           confidence -= 0.1;
-        } else if (previous && /\b(?:this|that|the same) redshift|there\b|at this distance/i.test(sentenceText) && previous.mentions.length === 1 && !previous.mentions[0].range) {
-          z = previous.mentions[0].value;
+        } else if (previous && read.refersBack && previous.onlyZ !== null) {
+          z = previous.onlyZ;
           zSource = 'previous-sentence';
           confidence -= 0.2;
-        } else if (previous && previous.mentions.length === 1 && !previous.mentions[0].range && previous.mentions[0].list.length === 0 && !isLimit(text, previous.mentions[0])) {
-          z = previous.mentions[0].value;
+        } else if (previous && previous.soleZ !== null) {
+          z = previous.soleZ;
           zSource = 'previous-sentence';
           confidence -= 0.3;
         } else if (context) {
           z = context.z;
           zSource = 'previous-sentence';
           confidence -= 0.35;
-        } else if (namedObjects(sentenceText).some((o) => objectRedshifts.has(o))) {
-          const names = [...new Set(namedObjects(sentenceText).filter((o) => objectRedshifts.has(o)).map((o) => objectRedshifts.get(o)!))];
+        } else if (read.objects.some((o) => objectRedshifts.has(o))) {
+          const names = [...new Set(read.objects.filter((o) => objectRedshifts.has(o)).map((o) => objectRedshifts.get(o)!))];
           if (names.length === 1) {
             z = names[0];
             zSource = 'previous-sentence';
@@ -223,19 +233,9 @@ export function extractClaims(doc: DocumentReading, cache?: SentenceCache): Clai
         confidence: Math.max(0.1, Math.min(1, confidence)), unchecked,
       });
     }
-    previous = { sentence, mentions };
-    // A limit ("the volume to z = 3") says nothing about where the paragraph's objects are.
-    const anchors = mentions.filter((m) => !isLimit(text, m));
-    if (anchors.length === 0 && mentions.length > 0) continue;
-    const distinctHere = [...new Set(flat.filter((m) => !m.range).map((m) => m.value))];
-    if (distinctHere.length === 1 && !flat.some((m) => m.range)) {
-      context = { block, z: distinctHere[0] };
-      for (const name of namedObjects(sentenceText)) objectRedshifts.set(name, distinctHere[0]);
-    }
-    else if (distinctHere.length > 1 || flat.some((m) => m.range)) context = null;
   }
 
-  claims.push(...tableClaims(doc, inSkip, units, numbersIn));
+  claims.push(...tableClaims(doc, inSkip, units, numbersIn, cache));
   claims.sort((a, b) => a.start - b.start);
   cache?.endRun();
   return { claims, declarations };
@@ -246,9 +246,25 @@ type FoundClaim = Omit<Claim, 'z' | 'zRange' | 'zSource' | 'unchecked' | 'confid
 
 /** What a sentence says, from its text alone: its numbers, redshift mentions and typed (unbound) claims. */
 export interface SentenceReading {
-  readonly numbers: readonly StatedNumber[];
+  /** The redshift mentions, when the sentence has claims to bind (else empty). */
   readonly mentions: readonly RedshiftMention[];
   readonly found: readonly FoundClaim[];
+  /** The distinct single redshifts the sentence names (ranges left out). */
+  readonly redshifts: readonly number[];
+  /** Whether it names a range of redshift. */
+  readonly hasRange: boolean;
+  /** Whether it names no redshift or at least one that is not a limit ("to z = 3"). */
+  readonly anchored: boolean;
+  /** Its one redshift mention's value, if it has exactly one and that is not a range ("this redshift" in the next sentence). */
+  readonly onlyZ: number | null;
+  /** The same, when that mention is a single value and not a limit (an unmarked next sentence may inherit it). */
+  readonly soleZ: number | null;
+  /** Whether it points back ("this redshift", "there", "at this distance"). */
+  readonly refersBack: boolean;
+  /** Whether it pairs lists ("respectively", "each"). */
+  readonly saysRespectively: boolean;
+  /** Catalogue-style object names in it. */
+  readonly objects: readonly string[];
 }
 
 /** Reads the numbers, redshifts and claims of one sentence. Depends only on the text in and just around the sentence. */
@@ -400,7 +416,21 @@ function readSentence(text: string, sentence: Sentence, numbers: StatedNumber[])
     add('expansionFactor', n, n.end, 0, { sinceEpoch: since });
   }
 
-  return { numbers, mentions, found };
+  const only = mentions.length === 1 && !mentions[0].range ? mentions[0] : null;
+  return {
+    // Redshift mentions matter only for binding this sentence's claims: without claims they are
+    // dropped (and a cached reading then has no offsets to move).
+    mentions: found.length > 0 ? mentions : [],
+    found,
+    redshifts: [...new Set(mentions.flatMap((m) => (m.range ? m.list : [m.value, ...m.list])))],
+    hasRange: mentions.some((m) => m.range !== null),
+    anchored: mentions.length === 0 || mentions.some((m) => !isLimit(text, m)),
+    onlyZ: only ? only.value : null,
+    soleZ: only && only.list.length === 0 && !isLimit(text, only) ? only.value : null,
+    refersBack: /\b(?:this|that|the same) redshift|there\b|at this distance/i.test(sentenceText),
+    saysRespectively: /respectively|\beach\b/i.test(sentenceText),
+    objects: namedObjects(sentenceText),
+  };
 }
 
 /** Whether a redshift mention is a limit ("to z = 3", "out to z = 6", "within z < 1") rather than where something is. */
@@ -430,71 +460,101 @@ function pureNumberKind(near: string, n: StatedNumber): { kind: ClaimKind; dista
   return best;
 }
 
-/** Claims in table cells: the kind from the column header, the redshift from the row's z column. */
-function tableClaims(doc: DocumentReading, inSkip: (pos: number) => boolean, units: Map<string, Unit | null>, numbersIn: (from: number, to: number) => StatedNumber[]): Claim[] {
-  const text = doc.reading.text;
-  const cells = doc.blocks.filter((b) => b.kind === 'table-cell' && b.cell);
-  const out: Claim[] = [];
-  // The redshift cell of each row ("z", "z_spec", "redshift" column), found once per row.
-  const zCellOfRow = new Map<string, (typeof cells)[number] | null>();
-  const isZHeader = new Map<string, boolean>();
-  for (const c of cells) {
-    const key = `${c.cell!.table}:${c.cell!.row}`;
-    if (!zCellOfRow.has(key)) zCellOfRow.set(key, null);
-    const header = c.cell!.header ?? '';
-    let isZ = isZHeader.get(header);
-    if (isZ === undefined) isZHeader.set(header, (isZ = /^(?:z|z_\w+|redshift)\b/i.test(header.trim())));
-    if (isZ && zCellOfRow.get(key) === null) zCellOfRow.set(key, c);
-  }
-  // A table's caption may give the redshift of all its rows ("Distances at z = 0.5"): the
-  // caption read just before the table's first cell, or — for a caption set below the table —
-  // just after its last cell, with nothing in between.
-  const captionRedshift = new Map<number, number | null>();
-  const captionOf = new Map<number, (typeof doc.blocks)[number]>();
-  const redshiftOf = (caption: (typeof doc.blocks)[number]) => {
-    const mentions = findRedshifts(text, caption.start, caption.end);
-    return mentions.length === 1 && !mentions[0].range && mentions[0].list.length === 0 ? mentions[0].value : null;
-  };
-  let lastCaption: (typeof doc.blocks)[number] | null = null;
-  let lastTable: number | null = null;
+/** A table's cells with the captions that belong to it (one set just above it, any set just below). */
+interface TableParts {
+  readonly cells: Block[];
+  above: Block | null;
+  readonly below: Block[];
+}
+
+/** The tables of a document with their captions, in document order. */
+function tablesOf(doc: DocumentReading): TableParts[] {
+  const tables = new Map<number, TableParts>();
+  let lastCaption: Block | null = null;
+  let lastTable: TableParts | null = null;
   for (const b of doc.blocks) {
     if (b.kind === 'caption') {
-      if (lastTable !== null && (captionRedshift.get(lastTable) ?? null) === null) captionRedshift.set(lastTable, redshiftOf(b));
-      if (lastTable !== null && !captionOf.has(lastTable)) captionOf.set(lastTable, b);
+      lastTable?.below.push(b);
       lastCaption = b;
       lastTable = null;
-    } else if (b.kind === 'table-cell') {
-      const id = b.cell!.table;
-      lastTable = id;
-      if (captionRedshift.has(id)) continue;
-      captionRedshift.set(id, lastCaption ? redshiftOf(lastCaption) : null);
-      if (lastCaption) captionOf.set(id, lastCaption);
+    } else if (b.kind === 'table-cell' && b.cell) {
+      let table = tables.get(b.cell.table);
+      if (!table) tables.set(b.cell.table, (table = { cells: [], above: lastCaption, below: [] }));
+      table.cells.push(b);
+      lastTable = table;
     } else {
       lastCaption = null;
       lastTable = null;
     }
   }
-  /** Units a caption gives for its columns ("distances in Mpc, times in Gyr"). */
-  const captionUnits = new Map<number, StatedUnit[]>();
-  const unitsOfCaption = (table: number): StatedUnit[] => {
-    let list = captionUnits.get(table);
-    if (!list) {
-      list = [];
-      const caption = captionOf.get(table);
+  return [...tables.values()];
+}
+
+/**
+ * Claims in table cells: the kind from the column header, the redshift from the row's z column
+ * (or the table's caption). A table's claims depend only on its cells, their layout and its
+ * captions, so an editor's cache keeps them per table.
+ */
+function tableClaims(doc: DocumentReading, inSkip: (pos: number) => boolean, units: Map<string, Unit | null>, numbersIn: (from: number, to: number) => StatedNumber[], cache?: SentenceCache): Claim[] {
+  const out: Claim[] = [];
+  for (const table of tablesOf(doc)) {
+    const first = table.cells[0];
+    const last = table.cells[table.cells.length - 1];
+    const start = Math.min(first.start, table.above?.start ?? Infinity);
+    const end = Math.max(last.end, ...table.below.map((b) => b.end));
+    // What the claims depend on besides the text: where cells and captions are, rows and headers.
+    const layout = cache ? tableLayout(table, start) : '';
+    let claims = cache?.takeTable(start, end, layout) ?? null;
+    if (!claims) {
+      claims = claimsOfTable(doc.reading.text, table, units, numbersIn);
+      cache?.putTable(start, end, layout, claims);
+    }
+    for (const c of claims) if (!inSkip(c.sentenceStart)) out.push(c);
+  }
+  return out;
+}
+
+function tableLayout(table: TableParts, start: number): string {
+  const parts: (string | number)[] = [table.above ? table.above.start - start : -1, table.above ? table.above.end - start : -1];
+  for (const b of table.below) parts.push('b', b.start - start, b.end - start);
+  for (const c of table.cells) parts.push('c', c.start - start, c.end - start, c.cell!.row, c.cell!.header ?? '\u0002');
+  return parts.join('\u0001');
+}
+
+function claimsOfTable(text: string, table: TableParts, units: Map<string, Unit | null>, numbersIn: (from: number, to: number) => StatedNumber[]): Claim[] {
+  const out: Claim[] = [];
+  // The redshift cell of each row ("z", "z_spec", "redshift" column).
+  const zCellOfRow = new Map<number, Block>();
+  for (const c of table.cells) {
+    if (!zCellOfRow.has(c.cell!.row) && /^(?:z|z_\w+|redshift)\b/i.test((c.cell!.header ?? '').trim())) zCellOfRow.set(c.cell!.row, c);
+  }
+  // A caption may give the redshift of all rows ("Distances at z = 0.5"): the one above the
+  // table, or else one below it.
+  let captionZ: number | null = null;
+  for (const caption of [...(table.above ? [table.above] : []), ...table.below]) {
+    const mentions = findRedshifts(text, caption.start, caption.end);
+    captionZ = mentions.length === 1 && !mentions[0].range && mentions[0].list.length === 0 ? mentions[0].value : null;
+    if (captionZ !== null) break;
+  }
+  /** Units the caption gives for its columns ("distances in Mpc, times in Gyr"). */
+  let captionUnits: StatedUnit[] | null = null;
+  const unitsOfCaption = (): StatedUnit[] => {
+    if (!captionUnits) {
+      captionUnits = [];
+      const caption = table.above ?? table.below[0];
       if (caption) {
         for (const m of text.slice(caption.start, caption.end).matchAll(/\b(?:in|in units of)\s+/g)) {
           const u = unitAt(text, caption.start + m.index! + m[0].length, units);
-          if (u?.unit) list.push(u);
+          if (u?.unit) captionUnits.push(u);
         }
       }
-      captionUnits.set(table, list);
     }
-    return list;
+    return captionUnits;
   };
   const kindOfHeader = new Map<string, ClaimKind | null>();
-  for (const c of cells) {
+  for (const c of table.cells) {
     const header = c.cell!.header;
-    if (!header || inSkip(c.start)) continue;
+    if (!header) continue;
     let headerKind = kindOfHeader.get(header);
     if (headerKind === undefined) kindOfHeader.set(header, (headerKind = kindFromHeader(header)));
     if (!headerKind) continue;
@@ -504,12 +564,12 @@ function tableClaims(doc: DocumentReading, inSkip: (pos: number) => boolean, uni
     const unitText = /\(([^)]+)\)|\[([^\]]+)\]/.exec(header);
     const wanted = KIND_CUES.find((k) => k.kind === headerKind)?.dimension ?? null;
     const unit = n.unit ?? (unitText ? unitAt(unitText[1] ?? unitText[2], 0, units) : null) ??
-      unitsOfCaption(c.cell!.table).find((u) => dimensionsMatch(wanted, u.unit!.dimensions as unknown as Record<string, number>)) ?? null;
+      unitsOfCaption().find((u) => dimensionsMatch(wanted, u.unit!.dimensions as unknown as Record<string, number>)) ?? null;
     const value: StatedNumber = unit && !n.unit ? { ...n, unit: { ...unit, start: c.start, end: c.start } } : n;
-    const rowZ = zCellOfRow.get(`${c.cell!.table}:${c.cell!.row}`) ?? null;
+    const rowZ = zCellOfRow.get(c.cell!.row) ?? null;
     const zCell = rowZ !== c ? rowZ : null;
     const zNumbers = zCell ? numbersIn(zCell.start, zCell.end) : [];
-    const fromCaption = zCell ? null : captionRedshift.get(c.cell!.table) ?? null;
+    const fromCaption = zCell ? null : captionZ;
     const z = zNumbers.length === 1 ? zNumbers[0].value : fromCaption;
     out.push({
       kind: headerKind,

@@ -15,7 +15,7 @@
 import type { ParameterInput, ParameterKey } from '../cosmology/parameters.js';
 import { parseParameterText, mergeWithPreset } from '../cosmology/parameterText.js';
 import { findPreset, type Preset } from '../cosmology/presets.js';
-import { CITATION_OPEN, INJECTED_VALUE, type DocumentReading } from '../reader/documentReading.js';
+import { CITATION_OPEN, INJECTED_VALUE, type DocumentReading, type Sentence } from '../reader/documentReading.js';
 import type { Unit } from '../cosmology/units.js';
 import { findNumbers, type StatedNumber } from './numberParser.js';
 
@@ -109,6 +109,7 @@ export function findDeclarations(
   doc: DocumentReading,
   unitCache?: Map<string, Unit | null>,
   numbersIn: (from: number, to: number) => StatedNumber[] = (from, to) => findNumbers(doc.reading.text, from, to, unitCache),
+  memo?: (sentence: Sentence, read: () => ProseDeclaration | null) => ProseDeclaration | null,
 ): DeclarationScan {
   const text = doc.reading.text;
   const declarations: Declaration[] = [];
@@ -160,60 +161,21 @@ export function findDeclarations(
 
   // Prose.
   for (const s of doc.sentences) {
-    const sentence = text.slice(s.start, s.end);
-    // Only sentences with a parameter symbol, a cue or a named set can declare anything.
-    if (!/[HΩωwTNΣ∑mh]|Omega|Planck|WMAP|⟦/.test(sentence)) continue;
-    const cue = DECLARATION_CUE.test(sentence);
-    // Named sets need a name or a citation to stand on.
-    const named = /planck|wmap|komatsu|hinshaw|⟦/i.test(sentence) ? namedSet(sentence) : null;
-    // Without a cue or a named set, only a sentence with two parameter statements declares
-    // anything, and that takes two parameter symbols: most sentences stop here, unparsed.
-    if (!cue && !named && countSymbols(sentence) < 2) continue;
-    const statements = parameterStatements(text, s.start, s.end, numbersIn(s.start, s.end));
-    const flat = /\bflat\b|spatially flat|Ω_?k\s*=\s*0(?![.\d])|zero curvature/i.test(sentence);
-    const lambdaFromMatter = /Ω_?(?:Λ|λ|L)\S*\s*=\s*1\s*[-−]\s*Ω_?(?:m|M)/.exec(sentence);
-    const injected = sentence.includes(INJECTED_VALUE) && /H_?0|Ω|h\s*=/.test(sentence);
-    if (!cue && statements.length < 2 && !named) continue;
-    if (MEASUREMENT_CUE.test(sentence) && !/\b(?:adopt|assum)/i.test(sentence)) continue;
-    if (statements.length === 0 && !named && !injected) continue;
-    const other = OTHER_MODEL_CUE.test(sentence);
-    const input: ParameterInput = {};
-    const stated: string[] = [];
-    for (const st of statements) {
-      if (input[st.key] !== undefined && input[st.key] !== st.value) {
-        problems.push({ message: `${st.key} is stated twice in one sentence with different values`, ranges: [{ start: st.start, end: st.end }] });
-      }
-      input[st.key] = st.value;
-      stated.push(st.key);
-    }
-    if (flat || lambdaFromMatter) {
-      input.flat = true;
-      stated.push('flat');
-    }
-    let preset: Preset | null = null;
-    if (named) {
-      if (named.preset) preset = findPreset(named.preset) ?? null;
-    }
-    const merged = preset && statements.length === 0 ? mergeWithPreset(preset, input) : input;
-    const incomplete = injected
-      ? 'a value is injected at build time (\\variable{…}); declare the parameters with a comove directive'
-      : named && !named.preset && statements.length === 0
-        ? `the named set "${named.text}" is not one Comove holds; declare its parameters with a comove directive`
-        : null;
-    if (named && !preset && statements.length === 0 && !incomplete) continue;
-    const start = statements.length ? Math.min(...statements.map((x) => x.start)) : s.start;
-    const end = statements.length ? Math.max(...statements.map((x) => x.end)) : s.end;
+    const found = memo ? memo(s, () => proseDeclaration(text, s, numbersIn)) : proseDeclaration(text, s, numbersIn);
+    if (!found) continue;
+    problems.push(...found.problems);
+    const other = found.other;
     declarations.push({
-      origin: statements.length ? 'prose' : 'named-set',
+      origin: found.origin,
       role: other ? 'other-model' : 'document',
-      input: merged,
-      stated: preset && statements.length === 0 ? [`preset:${preset.name}`] : stated,
-      preset: preset?.name ?? null,
-      start: statements.length ? start : s.start,
-      end: statements.length ? end : s.end,
+      input: found.input,
+      stated: found.stated,
+      preset: found.preset,
+      start: found.start,
+      end: found.end,
       scopeStart: other ? sectionStart(s.start) : 0,
       scopeEnd: other ? sectionEnd(s.start) : text.length,
-      incomplete,
+      incomplete: found.incomplete,
       sourceRange: null,
     });
   }
@@ -232,6 +194,68 @@ export function findDeclarations(
     }
   }
   return { declarations, skips, problems };
+}
+
+/**
+ * What one sentence of prose declares, if anything, before its scope is known: it depends only
+ * on the sentence's text (an editor's cache keeps it per sentence).
+ */
+export interface ProseDeclaration extends Omit<Declaration, 'role' | 'scopeStart' | 'scopeEnd' | 'sourceRange'> {
+  /** Whether the sentence is about another model than the manuscript's ("for comparison, … EdS"). */
+  readonly other: boolean;
+  readonly problems: readonly DeclarationProblem[];
+}
+
+export function proseDeclaration(text: string, s: Sentence, numbersIn: (from: number, to: number) => StatedNumber[]): ProseDeclaration | null {
+  const sentence = text.slice(s.start, s.end);
+  // Only sentences with a parameter symbol, a cue or a named set can declare anything.
+  if (!/[HΩωwTNΣ∑mh]|Omega|Planck|WMAP|⟦/.test(sentence)) return null;
+  const cue = DECLARATION_CUE.test(sentence);
+  // Named sets need a name or a citation to stand on.
+  const named = /planck|wmap|komatsu|hinshaw|⟦/i.test(sentence) ? namedSet(sentence) : null;
+  // Without a cue or a named set, only a sentence with two parameter statements declares
+  // anything, and that takes two parameter symbols: most sentences stop here, unparsed.
+  if (!cue && !named && countSymbols(sentence) < 2) return null;
+  const statements = parameterStatements(text, s.start, s.end, numbersIn(s.start, s.end));
+  const flat = /\bflat\b|spatially flat|Ω_?k\s*=\s*0(?![.\d])|zero curvature/i.test(sentence);
+  const lambdaFromMatter = /Ω_?(?:Λ|λ|L)\S*\s*=\s*1\s*[-−]\s*Ω_?(?:m|M)/.exec(sentence);
+  const injected = sentence.includes(INJECTED_VALUE) && /H_?0|Ω|h\s*=/.test(sentence);
+  if (!cue && statements.length < 2 && !named) return null;
+  if (MEASUREMENT_CUE.test(sentence) && !/\b(?:adopt|assum)/i.test(sentence)) return null;
+  if (statements.length === 0 && !named && !injected) return null;
+  const problems: DeclarationProblem[] = [];
+  const input: ParameterInput = {};
+  const stated: string[] = [];
+  for (const st of statements) {
+    if (input[st.key] !== undefined && input[st.key] !== st.value) {
+      problems.push({ message: `${st.key} is stated twice in one sentence with different values`, ranges: [{ start: st.start, end: st.end }] });
+    }
+    input[st.key] = st.value;
+    stated.push(st.key);
+  }
+  if (flat || lambdaFromMatter) {
+    input.flat = true;
+    stated.push('flat');
+  }
+  const preset: Preset | null = named?.preset ? findPreset(named.preset) ?? null : null;
+  const merged = preset && statements.length === 0 ? mergeWithPreset(preset, input) : input;
+  const incomplete = injected
+    ? 'a value is injected at build time (\\variable{…}); declare the parameters with a comove directive'
+    : named && !named.preset && statements.length === 0
+      ? `the named set "${named.text}" is not one Comove holds; declare its parameters with a comove directive`
+      : null;
+  if (named && !preset && statements.length === 0 && !incomplete) return null;
+  return {
+    origin: statements.length ? 'prose' : 'named-set',
+    other: OTHER_MODEL_CUE.test(sentence),
+    input: merged,
+    stated: preset && statements.length === 0 ? [`preset:${preset.name}`] : stated,
+    preset: preset?.name ?? null,
+    start: statements.length ? Math.min(...statements.map((x) => x.start)) : s.start,
+    end: statements.length ? Math.max(...statements.map((x) => x.end)) : s.end,
+    incomplete,
+    problems,
+  };
 }
 
 /** A loose count of parameter symbols in a sentence (never fewer than parameterStatements can find). */

@@ -10,6 +10,7 @@
 import type { Block, DocumentReading, MathSpan } from './documentReading.js';
 import type { MacroDefinition } from './latexScanner.js';
 import { splitSentences } from './sentences.js';
+import { textChange } from './textChange.js';
 
 /** Characters an edit may remove or insert: they stand for themselves wherever plain text does. */
 const PLAIN = /^[A-Za-z0-9 .,;:!?()=+<>*/|@#"]*$/;
@@ -21,11 +22,7 @@ type LatexReading = DocumentReading & { macros: readonly MacroDefinition[] };
 export function patchLatexReading(oldSource: string, old: LatexReading, source: string): LatexReading | null {
   if (old.unread) return null;
   // The edit: the common prefix and suffix of the two sources.
-  const max = Math.min(oldSource.length, source.length);
-  let p = 0;
-  while (p < max && oldSource.charCodeAt(p) === source.charCodeAt(p)) p++;
-  let q = 0;
-  while (q < max - p && oldSource.charCodeAt(oldSource.length - 1 - q) === source.charCodeAt(source.length - 1 - q)) q++;
+  const { prefix: p, suffix: q } = textChange(oldSource, source);
   const removed = oldSource.length - p - q;
   const inserted = source.slice(p, source.length - q);
   if (removed === 0 && inserted === '') return old;
@@ -73,15 +70,24 @@ export function patchLatexReading(oldSource: string, old: LatexReading, source: 
     return x;
   };
   const blocks: Block[] = [];
+  // What ends before the edit is kept as it is; what follows is moved.
   for (const b of old.blocks) {
+    if (b.end < at) {
+      blocks.push(b);
+      continue;
+    }
     const start = b.start >= at ? move(b.start) : b.start;
-    const end = b.end >= at ? (b.end === at ? b.end + delta : move(b.end)) : b.end;
+    const end = b.end === at ? b.end + delta : move(b.end);
     blocks.push(b.cell ? { kind: b.kind, start, end, cell: b.cell } : { kind: b.kind, start, end });
   }
   const math: MathSpan[] = [];
   for (const m of old.math) {
+    if (m.end < at) {
+      math.push(m);
+      continue;
+    }
     const start = m.start >= at ? move(m.start) : m.start;
-    const end = m.end >= at ? (m.end === at ? m.end + delta : move(m.end)) : m.end;
+    const end = m.end === at ? m.end + delta : move(m.end);
     math.push({ start, end, display: m.display });
   }
   const srcMove = (x: number) => (x >= p + removed ? x + delta : x);
