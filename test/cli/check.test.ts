@@ -138,6 +138,15 @@ describe('comove migrate', () => {
     expect(r.stdout).toMatch(/not rewritten \(10\)/);
   });
 
+  it('writes derived parameters to a sensible precision and the set’s own values as they are', () => {
+    const r = runWithFiles(['migrate', 'examples/kestrel-survey.tex', '--to', 'planck-2018', '--write'], EXAMPLES);
+    const migrated = r.written['examples/kestrel-survey.tex'];
+    // planck-2018 states H0 = 67.66; Ω_m = (ω_b + ω_c + ω_ν)/h² = 0.31105 and Ω_Λ = 0.68886 are derived.
+    expect(migrated).toContain('$H_0 = 67.66$');
+    expect(migrated).toContain('$\\Omega_{\\rm m} = 0.311$');
+    expect(migrated).toContain('$\\Omega_\\Lambda = 0.6889$');
+  });
+
   it('lists what it cannot rewrite and does not write without --write', () => {
     const r = runWithFiles(['migrate', 'examples/kestrel-proposal.md', '--to', 'planck-2018'], EXAMPLES);
     expect(r.written).toEqual({});

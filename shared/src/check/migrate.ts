@@ -100,7 +100,11 @@ export function migrateFile(file: FileExtraction, to: ParameterInput, options: O
           notRewritten.push({ start: st.start, end: st.end, what: st.key, reason: `the new set does not give ${st.key}` });
           continue;
         }
-        const edit = restate(file.reading, file.text, n, v, true);
+        // A value the new set states is written as it is; one derived from it (Ω_m from ω_b and
+        // ω_c) to four significant digits, or as many as the author wrote.
+        const stated = typeof to[st.key] === 'number';
+        const written = stated ? v : Number(v.toPrecision(Math.min(15, Math.max(4, n.significantDigits))));
+        const edit = restate(file.reading, file.text, n, written, true);
         if (typeof edit === 'string') notRewritten.push({ start: st.start, end: st.end, what: st.key, reason: edit });
         else push(edit, `declared ${st.key}`);
       }
