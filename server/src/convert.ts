@@ -158,7 +158,7 @@ export function inlayHintsOf(located: LocatedCheck, settings: ComoveSettings, ra
     const r = located.claimRange(c);
     if (range && (r.end.line < range.start.line || r.start.line > range.end.line)) continue;
     out.push({
-      position: r.end,
+      position: hintPosition(located, c),
       label: ` ${c.status === 'inconsistent' ? '≠' : '='} ${significant(c.computed, c.claim.value.significantDigits + 1)}`,
       kind: InlayHintKind.Parameter,
       paddingLeft: true,
@@ -166,6 +166,17 @@ export function inlayHintsOf(located: LocatedCheck, settings: ComoveSettings, ra
     });
   }
   return out;
+}
+
+/**
+ * Where a claim's hint goes: after the number and unit, and after the braces and dollars that
+ * close around them (`Mpc$^{-1}$`, `\SI{6.6}{Gpc}`), so that it never stands inside markup.
+ */
+function hintPosition(located: LocatedCheck, c: ClaimCheck): Position {
+  const source = located.check.extraction.text;
+  let end = located.check.extraction.reading.reading.sourceRange(c.claim.value.start, c.claim.end).end;
+  while (end < source.length && (source[end] === '}' || source[end] === '$')) end++;
+  return located.sourceRange(end, end).end;
 }
 
 /** The code lens on each document-wide declaration: the resolved set and the totals. */

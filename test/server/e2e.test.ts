@@ -73,6 +73,12 @@ describe('language server over stdio', () => {
     const uri = uriOf('kestrel-survey.tex');
     const hints = await client.connection.sendRequest(InlayHintRequest.type, { textDocument: { uri }, range: { start: { line: 0, character: 0 }, end: { line: 60, character: 0 } } });
     expect(hints).toHaveLength(10);
+    // A hint stands after the markup that closes around the unit, never inside it: after the
+    // `}$` of "17.4\,kpc\,arcsec$^{-1}$" (line 26), right after "7.60$\,Gpc" (line 24).
+    const lineText = (n: number) => survey.split('\n')[n];
+    const at = (line: number) => hints!.find((h) => h.position.line === line)!.position.character;
+    expect(lineText(25).slice(0, at(25))).toMatch(/17\.4\\,kpc\\,arcsec\$\^\{-1\}\$$/);
+    expect(lineText(23).slice(0, at(23))).toMatch(/7\.60\$\\,Gpc$/);
     const lenses = await client.connection.sendRequest(CodeLensRequest.type, { textDocument: { uri } });
     expect(lenses?.[0].command?.title).toBe('H0=70 Omega_m=0.3 flat · 31 numbers checked · 10 inconsistent');
     const symbols = (await client.connection.sendRequest(DocumentSymbolRequest.type, { textDocument: { uri } })) as Array<{ name: string }>;
