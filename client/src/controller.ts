@@ -28,7 +28,8 @@ export type WorkspaceEdit = Extract<MigrateResult, { edit: unknown }>['edit'];
 
 /** The language server's own requests. */
 export interface ServerPort {
-  documentClaims(uri: string): Promise<DocumentClaimsResult | null>;
+  /** The document's counts and set; its claims and charts only when asked for. */
+  documentClaims(uri: string, want: { claims: boolean; charts: boolean }): Promise<DocumentClaimsResult | null>;
   migrate(uri: string, to: string): Promise<MigrateResult>;
 }
 
@@ -37,6 +38,8 @@ export interface EditorPort {
   activeDocument(): DocumentRef | undefined;
   setStatus(status: { text: string; tooltip: string } | null): void;
   showClaims(uri: string | undefined, groups: ClaimGroup[]): void;
+  /** Whether the claims view is on screen (when it is not, the claims are not fetched). */
+  claimsVisible(): boolean;
   pick(items: readonly string[], placeHolder: string): Promise<string | undefined>;
   input(prompt: string): Promise<string | undefined>;
   applyEdit(edit: WorkspaceEdit): Promise<boolean>;
@@ -65,7 +68,10 @@ export class ExtensionController {
     return doc && MANUSCRIPT_LANGUAGES.includes(doc.languageId) ? doc : undefined;
   }
 
-  /** Updates the status bar and the claims tree for the active document (one request for both). */
+  /**
+   * Updates the status bar and, when it is on screen, the claims tree for the active document
+   * (one request for both; the claims themselves — thousands in a long manuscript — only for the tree).
+   */
   async refresh(): Promise<void> {
     const doc = this.manuscript();
     if (!doc) {
@@ -73,9 +79,10 @@ export class ExtensionController {
       this.editor.showClaims(undefined, []);
       return;
     }
-    const claims = await this.server.documentClaims(doc.uri);
-    this.editor.setStatus(statusText(claims?.parameters ?? null, claims?.claims ?? []));
-    this.editor.showClaims(doc.uri, claims ? groupClaims(claims.claims) : []);
+    const withClaims = this.editor.claimsVisible();
+    const result = await this.server.documentClaims(doc.uri, { claims: withClaims, charts: false });
+    this.editor.setStatus(statusText(result?.parameters ?? null, result?.counts ?? { claims: 0, checked: 0, inconsistent: 0 }));
+    if (withClaims) this.editor.showClaims(doc.uri, result ? groupClaims(result.claims) : []);
   }
 
   /**
@@ -84,7 +91,7 @@ export class ExtensionController {
    */
   async chooseParameterSet(): Promise<void> {
     const doc = this.manuscript();
-    const claims = doc ? await this.server.documentClaims(doc.uri) : null;
+    const claims = doc ? await this.server.documentClaims(doc.uri, { claims: false, charts: false }) : null;
     const declared = claims?.parameters?.origin === 'declared';
     const pick = await this.editor.pick([...PRESET_NAMES, OTHER_SET], declared ? 'The manuscript declares its set: choosing another rewrites the manuscript for it' : 'Parameter set for manuscripts that declare none');
     if (!pick) return;
@@ -117,7 +124,7 @@ export class ExtensionController {
 
   async showChart(): Promise<void> {
     const doc = this.manuscript();
-    const claims = doc ? await this.server.documentClaims(doc.uri) : null;
+    const claims = doc ? await this.server.documentClaims(doc.uri, { claims: false, charts: true }) : null;
     if (!doc || !claims) {
       this.editor.info('Comove: open a LaTeX or Markdown manuscript first.');
       return;

@@ -8,7 +8,7 @@
 
 import * as vscode from 'vscode';
 import { LanguageClient, TransportKind, type LanguageClientOptions, type ServerOptions } from 'vscode-languageclient/node';
-import type { DocumentClaimsResult, MigrateResult } from '../../server/src/protocol.js';
+import type { DocumentClaimsParams, DocumentClaimsResult, MigrateResult } from '../../server/src/protocol.js';
 import { ExtensionController, type EditorPort, type ServerPort } from './controller.js';
 import type { ClaimGroup } from './views/claimTree.js';
 
@@ -70,13 +70,14 @@ export async function activate(context: vscode.ExtensionContext): Promise<void> 
   await languageClient.start();
 
   const view = new ClaimsView();
-  context.subscriptions.push(vscode.window.registerTreeDataProvider('comove.claims', view));
+  const tree = vscode.window.createTreeView('comove.claims', { treeDataProvider: view });
+  context.subscriptions.push(tree);
   const status = vscode.window.createStatusBarItem(vscode.StatusBarAlignment.Left, 50);
   status.command = 'comove.chooseParameterSet';
   context.subscriptions.push(status);
 
   const server: ServerPort = {
-    documentClaims: async (uri) => (await languageClient.sendRequest<DocumentClaimsResult | null>('comove/documentClaims', { uri })) ?? null,
+    documentClaims: async (uri, want) => (await languageClient.sendRequest<DocumentClaimsResult | null>('comove/documentClaims', { uri, ...want } satisfies DocumentClaimsParams)) ?? null,
     migrate: (uri, to) => languageClient.sendRequest<MigrateResult>('comove/migrate', { uri, to }),
   };
   const editor: EditorPort = {
@@ -91,6 +92,7 @@ export async function activate(context: vscode.ExtensionContext): Promise<void> 
       status.show();
     },
     showClaims: (uri, groups) => view.show(uri, groups),
+    claimsVisible: () => tree.visible,
     pick: (items, placeHolder) => Promise.resolve(vscode.window.showQuickPick([...items], { placeHolder })),
     input: (prompt) => Promise.resolve(vscode.window.showInputBox({ prompt })),
     applyEdit: async (edit) => {
@@ -118,6 +120,7 @@ export async function activate(context: vscode.ExtensionContext): Promise<void> 
   context.subscriptions.push(
     vscode.window.onDidChangeActiveTextEditor(refreshSoon),
     vscode.languages.onDidChangeDiagnostics(refreshSoon),
+    tree.onDidChangeVisibility(refreshSoon),
     vscode.commands.registerCommand('comove.showClaims', () => vscode.commands.executeCommand('comove.claims.focus')),
     vscode.commands.registerCommand('comove.checkWorkspace', () => controller.checkWorkspace()),
     vscode.commands.registerCommand('comove.showChart', () => controller.showChart()),

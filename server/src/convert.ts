@@ -72,10 +72,17 @@ export function diagnosticsOf(located: LocatedCheck, settings: ComoveSettings, u
   const out: Diagnostic[] = [];
   const check = located.check;
   const code = (name: RuleName) => ruleFor(name).id;
+  // The related information of a parameter set, made once for all the claims under it.
+  const relatedOf = new Map<ClaimCheck['parameters'], Diagnostic['relatedInformation'] | null>();
   check.checks.forEach((c, claimIndex) => {
     if (c.status !== 'inconsistent' || !enabled(c, settings)) return;
     const computed = c.computed === null ? '' : significant(c.computed, c.claim.value.significantDigits + 1);
-    const related = c.parameters && c.parameters.uri === uri ? declarationRange(located, c.parameters.declarations[0]) : null;
+    let related = relatedOf.get(c.parameters);
+    if (related === undefined) {
+      const range = c.parameters && c.parameters.uri === uri ? declarationRange(located, c.parameters.declarations[0]) : null;
+      related = range ? [{ location: { uri, range }, message: `parameter set: ${c.parameters!.text}` }] : null;
+      relatedOf.set(c.parameters, related);
+    }
     out.push({
       range: located.claimRange(c),
       severity: severityOf(c, settings),
@@ -83,7 +90,7 @@ export function diagnosticsOf(located: LocatedCheck, settings: ComoveSettings, u
       code: code('inconsistent-value'),
       message: `${kindTitle(c.claim.kind)}${whereText(c)}: ${statedText(c)} disagrees with the declared cosmology, which gives ${computed}${c.unitText ? ` ${c.unitText}` : ''}${c.slip ? ` — ${c.slip.description}` : ''}`,
       data: { claimIndex, version } satisfies DiagnosticData,
-      ...(related ? { relatedInformation: [{ location: { uri, range: related }, message: `parameter set: ${c.parameters!.text}` }] } : {}),
+      ...(related ? { relatedInformation: related } : {}),
     });
   });
   for (const p of check.extraction.problems) {

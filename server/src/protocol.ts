@@ -1,6 +1,6 @@
 /**
  * The server's own requests, shared by the server and the VS Code client: `comove/documentClaims`
- * (a document's claims and chart data, for the views) and `comove/migrate` (the workspace edit
+ * (a document's claim counts, and on request its claims and chart data, for the views) and `comove/migrate` (the workspace edit
  * that moves a manuscript to another parameter set). Types only.
  */
 
@@ -23,9 +23,24 @@ export interface ClaimSummary {
   readonly reason: string | null;
 }
 
+/** How many claims a document has, how many were checked and how many disagree. */
+export interface ClaimCounts {
+  readonly claims: number;
+  readonly checked: number;
+  readonly inconsistent: number;
+}
+
+/** Parameters of `comove/documentClaims`: the parts left out (`claims: false`, `charts: false`) are sent empty. */
+export interface DocumentClaimsParams {
+  readonly uri: string;
+  readonly claims?: boolean;
+  readonly charts?: boolean;
+}
+
 export interface DocumentClaimsResult {
   readonly uri: string;
   readonly parameters: { readonly text: string; readonly origin: string } | null;
+  readonly counts: ClaimCounts;
   readonly claims: readonly ClaimSummary[];
   readonly charts: readonly Chart[];
 }

@@ -24,6 +24,7 @@ import {
   CosmologyCache,
   extractProject,
   formatOf,
+  headline,
   lineColumn,
   lineStartsOf,
   locate,
@@ -37,7 +38,7 @@ import {
 } from '../../shared/src/index.js';
 import { claimActions, claimAt, codeLensesOf, diagnosticsOf, documentSymbolsOf, hoverAt, inlayHintsOf, type DiagnosticData } from './convert.js';
 import { Projects } from './projects.js';
-import type { DocumentClaimsResult, MigrateResult } from './protocol.js';
+import type { DocumentClaimsParams, DocumentClaimsResult, MigrateResult } from './protocol.js';
 import { DEFAULT_SETTINGS, defaultParameterInput, readSettings, type ComoveSettings } from './settings.js';
 
 export const SERVER_VERSION = '0.1.0';
@@ -310,19 +311,26 @@ export function startServer(connection: Connection): void {
     return { edit: { changes }, notRewritten };
   };
 
-  connection.onRequest('comove/documentClaims', (params: { uri: string }): DocumentClaimsResult | null => {
+  connection.onRequest('comove/documentClaims', (params: DocumentClaimsParams): DocumentClaimsResult | null => {
     const r = resultFor(params.uri);
     if (!r) return null;
     const check = r.located.check;
     const set = check.parameters;
-    const made = set && !set.incomplete ? cache.get(set.input) : null;
+    const made = set && !set.incomplete && params.charts !== false ? cache.get(set.input) : null;
+    const checks = check.checks;
     return {
       uri: params.uri,
       parameters: set ? { text: set.text, origin: set.origin } : null,
-      claims: check.checks.map((c) => ({
+      counts: {
+        claims: checks.length,
+        checked: checks.filter((c) => c.status !== 'unchecked').length,
+        inconsistent: checks.filter((c) => c.status === 'inconsistent').length,
+      },
+      // A long manuscript has thousands of claims: the status bar asks for the counts alone.
+      claims: params.claims === false ? [] : checks.map((c) => ({
         range: r.located.claimRange(c),
         kind: c.claim.kind,
-        title: r.located.explanation(c).split('\n')[0].replace(/\*\*/g, ''),
+        title: headline(c),
         z: c.claim.z,
         stated: c.claim.value.text,
         unit: c.unitText,
@@ -331,7 +339,7 @@ export function startServer(connection: Connection): void {
         slip: c.slip?.description ?? null,
         reason: c.reason,
       })),
-      charts: made && made.ok ? chartData(check.checks, made.cosmology, (c) => c.parameters === set) : [],
+      charts: made && made.ok ? chartData(checks, made.cosmology, (c) => c.parameters === set) : [],
     };
   });
 

@@ -28,6 +28,9 @@ class RecordingEditor implements EditorPort {
   readonly defaults: string[] = [];
   answers: Array<string | undefined> = [];
   problemsShown = 0;
+  treeVisible = true;
+  /** The claims each documentClaims request asked for. */
+  readonly requests: Array<{ claims: boolean; charts: boolean }> = [];
 
   constructor(private readonly client: LspClient, private readonly folder: string) {}
 
@@ -47,6 +50,9 @@ class RecordingEditor implements EditorPort {
   }
   showClaims(uri: string | undefined, groups: ClaimGroup[]): void {
     this.claims = { uri, groups };
+  }
+  claimsVisible(): boolean {
+    return this.treeVisible;
   }
   pick(items: readonly string[]): Promise<string | undefined> {
     const answer = this.answers.shift();
@@ -103,7 +109,10 @@ beforeAll(async () => {
   await client.initialize(pathToFileURL(folder).href);
   editor = new RecordingEditor(client, folder);
   const server: ServerPort = {
-    documentClaims: (uri) => client.connection.sendRequest<DocumentClaimsResult | null>('comove/documentClaims', { uri }),
+    documentClaims: (uri, want) => {
+      editor.requests.push(want);
+      return client.connection.sendRequest<DocumentClaimsResult | null>('comove/documentClaims', { uri, ...want });
+    },
     migrate: (uri, to) => client.connection.sendRequest<MigrateResult>('comove/migrate', { uri, to }),
   };
   controller = new ExtensionController(server, editor);
@@ -127,6 +136,19 @@ describe('the extension against the language server', () => {
     expect(editor.claims?.groups[0].label).toBe(`Inconsistent (${wrong})`);
     // Each inconsistent item sits where its diagnostic is.
     expect(editor.claims?.groups[0].items.map((i) => i.line).sort((a, b) => a - b)).toEqual(inconsistent(published.diagnostics).map((d) => d.range.start.line).sort((a, b) => a - b));
+  });
+
+  it('while the claims view is hidden, refreshing asks for the counts alone and leaves the tree as it is', async () => {
+    editor.treeVisible = false;
+    editor.claims = null;
+    await controller.refresh();
+    expect(editor.requests.at(-1)).toEqual({ claims: false, charts: false });
+    expect(editor.status?.text).toMatch(/· 10 ✗$/);
+    expect(editor.claims).toBeNull();
+    editor.treeVisible = true;
+    await controller.refresh();
+    expect(editor.requests.at(-1)).toEqual({ claims: true, charts: false });
+    expect((editor.claims as { groups: ClaimGroup[] } | null)?.groups[0].label).toBe('Inconsistent (10)');
   });
 
   it('hides the status bar and empties the tree for a document that is not a manuscript', async () => {

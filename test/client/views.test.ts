@@ -34,9 +34,11 @@ describe('claims tree', () => {
 
 describe('status bar', () => {
   it('shows the set and the number of inconsistencies', () => {
-    expect(statusText({ text: 'H0=70 Omega_m=0.3 flat', origin: 'declared' }, [claim(1, 'inconsistent'), claim(2, 'consistent')]).text).toBe('$(telescope) H0=70 Omega_m=0.3 flat · 1 ✗');
-    expect(statusText(null, [claim(1, 'unchecked')]).tooltip).toMatch(/no declared parameter set: click to choose one/);
-    expect(statusText({ text: 'H0=67.66 omega_b=0.02242 omega_c=0.11933 T_CMB=2.7255 flat', origin: 'declared' }, []).text).toBe('$(telescope) H0=67.66 omega_b=0.02242 omega_…');
+    const declared = statusText({ text: 'H0=70 Omega_m=0.3 flat', origin: 'declared' }, { claims: 3, checked: 2, inconsistent: 1 });
+    expect(declared.text).toBe('$(telescope) H0=70 Omega_m=0.3 flat · 1 ✗');
+    expect(declared.tooltip).toMatch(/2 numbers checked, 1 inconsistent/);
+    expect(statusText(null, { claims: 1, checked: 0, inconsistent: 0 }).tooltip).toMatch(/^1 cosmology-dependent numbers, no declared parameter set: click to choose one/);
+    expect(statusText({ text: 'H0=67.66 omega_b=0.02242 omega_c=0.11933 T_CMB=2.7255 flat', origin: 'declared' }, { claims: 0, checked: 0, inconsistent: 0 }).text).toBe('$(telescope) H0=67.66 omega_b=0.02242 omega_…');
   });
 });
 

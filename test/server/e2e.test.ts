@@ -86,6 +86,9 @@ describe('language server over stdio', () => {
     const claims = (await client.connection.sendRequest('comove/documentClaims', { uri })) as { claims: unknown[]; charts: Array<{ title: string }> };
     expect(claims.claims).toHaveLength(31);
     expect(claims.charts.map((c) => c.title)).toEqual(['Distances', 'Times', 'Angular scales']);
+    // The status bar's request: counts only.
+    const light = (await client.connection.sendRequest('comove/documentClaims', { uri, claims: false, charts: false })) as { counts: unknown; claims: unknown[]; charts: unknown[] };
+    expect(light).toMatchObject({ counts: { claims: 31, checked: 31, inconsistent: 10 }, claims: [], charts: [] });
   });
 
   it('applies the quick fix and the diagnostic disappears', async () => {

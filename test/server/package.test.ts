@@ -33,7 +33,7 @@ describe('the .vsix package', () => {
     const source = readFileSync(ROOT + 'client/src/extension.ts', 'utf8');
     const registered = [...source.matchAll(/registerCommand\('([^']+)'/g)].map((m) => m[1]).sort();
     expect(manifest.contributes.commands.map((c: { command: string }) => c.command).sort()).toEqual(registered);
-    expect(source).toContain(`registerTreeDataProvider('${manifest.contributes.views.explorer[0].id}'`);
+    expect(source).toContain(`createTreeView('${manifest.contributes.views.explorer[0].id}'`);
     const grammar = JSON.parse(readFileSync(ROOT + manifest.contributes.grammars[0].path.replace('./', ''), 'utf8'));
     expect(grammar.scopeName).toBe(manifest.contributes.grammars[0].scopeName);
     // The grammar's directive pattern matches our directive comments.

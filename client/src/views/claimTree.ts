@@ -3,9 +3,9 @@
  * label, a description and the position to reveal. Pure: the extension turns it into tree items.
  */
 
-import type { ClaimSummary } from '../../../server/src/protocol.js';
+import type { ClaimCounts, ClaimSummary } from '../../../server/src/protocol.js';
 
-export type { ClaimSummary };
+export type { ClaimCounts, ClaimSummary };
 
 export interface ClaimGroup {
   readonly status: 'inconsistent' | 'unchecked' | 'consistent';
@@ -42,14 +42,14 @@ export function groupClaims(claims: readonly ClaimSummary[]): ClaimGroup[] {
 }
 
 /** The status bar text for a document: its parameter set and how many numbers disagree. */
-export function statusText(parameters: { text: string; origin: string } | null, claims: readonly ClaimSummary[]): { text: string; tooltip: string } {
-  const wrong = claims.filter((c) => c.status === 'inconsistent').length;
+export function statusText(parameters: { text: string; origin: string } | null, counts: ClaimCounts): { text: string; tooltip: string } {
+  const wrong = counts.inconsistent;
   if (!parameters) {
-    return { text: '$(telescope) Comove: no parameter set', tooltip: claims.length ? `${claims.length} cosmology-dependent numbers, no declared parameter set: click to choose one` : 'Comove: click to choose a parameter set' };
+    return { text: '$(telescope) Comove: no parameter set', tooltip: counts.claims ? `${counts.claims} cosmology-dependent numbers, no declared parameter set: click to choose one` : 'Comove: click to choose a parameter set' };
   }
   const set = parameters.text.length > 32 ? `${parameters.text.slice(0, 31)}…` : parameters.text;
   return {
     text: `$(telescope) ${set}${wrong ? ` · ${wrong} ✗` : ''}`,
-    tooltip: `Comove parameter set (${parameters.origin}): ${parameters.text}\n${claims.filter((c) => c.status !== 'unchecked').length} numbers checked, ${wrong} inconsistent. Click to choose another set.`,
+    tooltip: `Comove parameter set (${parameters.origin}): ${parameters.text}\n${counts.checked} numbers checked, ${wrong} inconsistent. Click to choose another set.`,
   };
 }

@@ -75,6 +75,11 @@ export function whereText(check: ClaimCheck): string {
   return '';
 }
 
+/** The first line of an explanation, plain: "Luminosity distance at z = 0.48 — consistent". */
+export function headline(check: ClaimCheck): string {
+  return `${kindTitle(check.claim.kind)}${whereText(check)} — ${check.status}`;
+}
+
 /** The Markdown explanation of one verdict. `declaredAt` turns a parameter choice into a link text. */
 export function explain(check: ClaimCheck, declaredAt: (uri: string, line: number) => string = (uri, line) => `${uri}, line ${line + 1}`): string {
   const c = check.claim;
