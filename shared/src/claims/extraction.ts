@@ -62,7 +62,7 @@ export function readFile(file: SourceFile, format: DocumentFormat = formatOf(fil
     return unreadDocument(format, 'this is a binary file, not a manuscript');
   }
   if (format === 'latex') return memory ? memory.readLatex(file.uri, file.text, macros, () => readLatex(file.text, { macros })) : readLatex(file.text, { macros });
-  if (format === 'markdown') return readMarkdown(file.text);
+  if (format === 'markdown') return readMarkdown(file.text, memory?.markdown(file.uri));
   return readPlainText(file.text);
 }
 

@@ -9,6 +9,7 @@
 
 import type { Block, DocumentReading, MathSpan } from './documentReading.js';
 import type { MacroDefinition } from './latexScanner.js';
+import { MarkdownMemory } from './markdownChunks.js';
 import { splitSentences } from './sentences.js';
 import { textChange } from './textChange.js';
 
@@ -117,10 +118,11 @@ export function patchLatexReading(oldSource: string, old: LatexReading, source: 
 /**
  * The last reading of each LaTeX file, owned by the caller (an editor keeps one per session), so
  * that the next reading after a small edit is a patch. A reading is reused only with the same
- * macros from the including file.
+ * macros from the including file. For Markdown files it keeps the parsed pieces instead.
  */
 export class ReadingMemory {
   private readonly entries = new Map<string, { text: string; macrosKey: string; reading: LatexReading }>();
+  private readonly markdownEntries = new Map<string, MarkdownMemory>();
   private patchedCount = 0;
   private readCount = 0;
 
@@ -136,8 +138,16 @@ export class ReadingMemory {
     return reading;
   }
 
+  /** The parsed pieces of a Markdown file, kept between its readings. */
+  markdown(uri: string): MarkdownMemory {
+    let m = this.markdownEntries.get(uri);
+    if (!m) this.markdownEntries.set(uri, (m = new MarkdownMemory()));
+    return m;
+  }
+
   forget(uri: string): void {
     this.entries.delete(uri);
+    this.markdownEntries.delete(uri);
   }
 
   /** How many readings were patched and how many read in full (for tests and benchmarks). */

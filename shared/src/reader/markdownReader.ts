@@ -16,6 +16,7 @@ import { unified } from 'unified';
 import { parse as parseYaml } from 'yaml';
 import { unreadDocument, type Block, type BlockKind, type Directive, type DocumentReading, type MathSpan, type ReaderProblem, type TableCellPosition } from './documentReading.js';
 import { readLatex } from './latexScanner.js';
+import { markdownChunks, shiftNodes, type MarkdownMemory } from './markdownChunks.js';
 import { splitSentences } from './sentences.js';
 import { OutputStore, type Draft } from './sourceMap.js';
 
@@ -227,11 +228,22 @@ export function frontMatterDeclaration(value: unknown): string {
 }
 
 /** Reads a Markdown source. Never throws. */
-export function readMarkdown(source: string): DocumentReading {
+/**
+ * Reads a Markdown source. With `memory` (an editor's), the source is parsed piece by piece
+ * (markdownChunks.ts) and pieces unchanged since the last reading are not parsed again; the
+ * reading is the same either way.
+ */
+export function readMarkdown(source: string, memory?: MarkdownMemory): DocumentReading {
   const walker = new MarkdownWalker(source);
   try {
-    const tree = parser.parse(source) as Root;
-    walker.walkBlocks(tree.children);
+    const chunks = memory ? markdownChunks(source) : null;
+    if (memory && chunks) {
+      const parse = (text: string) => (parser.parse(text) as Root).children;
+      for (const c of chunks) walker.walkBlocks(shiftNodes(memory.nodes(source.slice(c.start, c.end), parse), c.start, c.line - 1));
+      memory.endRun();
+    } else {
+      walker.walkBlocks((parser.parse(source) as Root).children);
+    }
     return walker.assemble();
   } catch (e) {
     return unreadDocument('markdown', `internal reader error: ${(e as Error).message}`);
