@@ -5,7 +5,9 @@
  * lines, and before a line that can only start a new block (a letter, #, |, $, `, <, !, \).
  * Each piece parses to exactly the nodes the whole document would give there, so an editor can
  * keep each piece's parse and parse again only the piece an edit touched (`MarkdownMemory`).
- * Documents with link-reference or footnote definitions (which reach across pieces) are not cut.
+ * Link-reference and footnote definitions reach across pieces: a document that has them is
+ * parsed whole once, its definitions are kept, and a piece is then parsed with them appended
+ * (markdownReader.ts).
  */
 
 import type { RootContent } from 'mdast';
@@ -17,8 +19,13 @@ export interface Chunk {
   readonly line: number;
 }
 
-/** Definitions that apply document-wide: `[label]: url`, `[^note]: text`. */
-const DEFINITION = /^ {0,3}\[[^\]\n]+\]:/m;
+/** What may be a definition that applies document-wide (`[label]: url`, `[^note]: text`), wherever it stands. */
+const DEFINITION = /\[[^\]\n]+\]:/;
+
+/** Whether a text may hold a link-reference or footnote definition. */
+export function mayDefine(text: string): boolean {
+  return DEFINITION.test(text);
+}
 /** First characters of a line that can only begin a new block after a blank line. */
 const SAFE_START = /^[A-Za-z#|$`<!\\]/;
 const FENCE_OPEN = /^ {0,3}(`{3,}|~{3,})/;
@@ -33,9 +40,8 @@ const HTML_RUNS: ReadonlyArray<[RegExp, RegExp]> = [
   [/^ {0,3}<!\[CDATA\[/, /\]\]>/],
 ];
 
-/** The pieces of a Markdown document, or null when it must be parsed whole. */
+/** The pieces of a Markdown document, or null when it must be parsed whole (it ends inside code, math or HTML). */
 export function markdownChunks(text: string): Chunk[] | null {
-  if (DEFINITION.test(text)) return null;
   const chunks: Chunk[] = [];
   let chunkStart = 0;
   let chunkLine = 1;
@@ -85,6 +91,7 @@ export function markdownChunks(text: string): Chunk[] | null {
     previousBlank = blank;
     at = nl < 0 ? text.length : nl + 1;
   }
+  if (fence !== null || math || html !== null || frontMatter) return null;
   chunks.push({ start: chunkStart, end: text.length, line: chunkLine });
   return chunks;
 }
@@ -109,11 +116,14 @@ export function shiftNodes(nodes: readonly RootContent[], offset: number, lines:
 
 /**
  * The parse of each piece of a Markdown file from the last reading, kept by the piece's text (an
- * editor's; see markdownReader.ts). What the last reading did not use is dropped.
+ * editor's; see markdownReader.ts), with the definitions the pieces were parsed with. What the
+ * last reading did not use is dropped.
  */
 export class MarkdownMemory {
   private previous = new Map<string, readonly RootContent[]>();
   private current = new Map<string, readonly RootContent[]>();
+  /** The definitions appended to each piece, and the texts of the pieces that hold them. */
+  private definitions: { text: string; holders: readonly string[] } | null = null;
   private parsedCount = 0;
   private reusedCount = 0;
 
@@ -127,6 +137,30 @@ export class MarkdownMemory {
     }
     this.current.set(chunkText, nodes);
     return nodes;
+  }
+
+  /** Stores the nodes of a piece taken from a parse of the whole document. */
+  put(chunkText: string, nodes: readonly RootContent[]): void {
+    this.current.set(chunkText, nodes);
+  }
+
+  /**
+   * The definitions text to parse pieces with, if the pieces that hold definitions are the same
+   * as last time; null when the whole document must be parsed again to find them.
+   */
+  definitionsFor(holders: readonly string[]): string | null {
+    const d = this.definitions;
+    if (!d || d.holders.length !== holders.length || d.holders.some((h, i) => h !== holders[i])) return null;
+    return d.text;
+  }
+
+  /** Sets the definitions pieces are parsed with (null: none); pieces parsed with others are dropped. */
+  setDefinitions(definitions: { text: string; holders: readonly string[] } | null): void {
+    if ((definitions?.text ?? null) !== (this.definitions?.text ?? null)) {
+      this.previous = new Map();
+      this.current = new Map();
+    }
+    this.definitions = definitions;
   }
 
   endRun(): void {

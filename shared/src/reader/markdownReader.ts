@@ -16,7 +16,7 @@ import { unified } from 'unified';
 import { parse as parseYaml } from 'yaml';
 import { unreadDocument, type Block, type BlockKind, type Directive, type DocumentReading, type MathSpan, type ReaderProblem, type TableCellPosition } from './documentReading.js';
 import { readLatex } from './latexScanner.js';
-import { markdownChunks, shiftNodes, type MarkdownMemory } from './markdownChunks.js';
+import { markdownChunks, mayDefine, shiftNodes, type Chunk, type MarkdownMemory } from './markdownChunks.js';
 import { splitSentences } from './sentences.js';
 import { OutputStore, type Draft } from './sourceMap.js';
 
@@ -229,6 +229,64 @@ export function frontMatterDeclaration(value: unknown): string {
 
 /** Reads a Markdown source. Never throws. */
 /**
+ * Walks a document piece by piece, parsing only the pieces `memory` does not hold. A document
+ * with definitions is parsed whole whenever the pieces that hold them change (its definitions
+ * are then collected); otherwise each piece is parsed with those definitions appended after a
+ * blank line, and only the piece's own nodes are kept.
+ */
+function readInPieces(walker: MarkdownWalker, source: string, chunks: readonly Chunk[], memory: MarkdownMemory): void {
+  const texts = chunks.map((c) => source.slice(c.start, c.end));
+  const holders = texts.filter(mayDefine);
+  let definitions: string | null = null;
+  if (holders.length === 0) memory.setDefinitions(null);
+  else {
+    definitions = memory.definitionsFor(holders);
+    if (definitions === null) {
+      // Parse the whole document; keep its definitions and each piece's nodes.
+      const tree = parser.parse(source) as Root;
+      const found: string[] = [];
+      const visit = (nodes: readonly Nodes[]) => {
+        for (const n of nodes) {
+          if ((n.type === 'definition' || n.type === 'footnoteDefinition') && n.position) found.push(source.slice(n.position.start.offset, n.position.end.offset));
+          if ('children' in n) visit(n.children as Nodes[]);
+        }
+      };
+      visit(tree.children);
+      memory.setDefinitions({ text: found.join('\n\n'), holders });
+      let k = 0;
+      chunks.forEach((c, i) => {
+        const own: RootContent[] = [];
+        while (k < tree.children.length && (tree.children[k].position?.start.offset ?? 0) < c.end) own.push(tree.children[k++]);
+        if (own.every((n) => (n.position?.end.offset ?? 0) <= c.end)) memory.put(texts[i], shiftNodes(own, -c.start, -(c.line - 1)));
+      });
+      walker.walkBlocks(tree.children);
+      memory.endRun();
+      return;
+    }
+  }
+  const appended = definitions;
+  const parse = (text: string): readonly RootContent[] => {
+    if (appended === null) return (parser.parse(text) as Root).children;
+    const own = (parser.parse(`${text}\n\n${appended}`) as Root).children.filter((n) => (n.position?.start.offset ?? 0) < text.length);
+    // A node of the piece that runs on into the definitions: the piece cannot be read on its own.
+    if (own.some((n) => (n.position?.end.offset ?? 0) > text.length)) throw RUNS_ON;
+    return own;
+  };
+  const parts: RootContent[][] = [];
+  try {
+    chunks.forEach((c, i) => parts.push(shiftNodes(memory.nodes(texts[i], parse), c.start, c.line - 1)));
+  } catch (e) {
+    if (e !== RUNS_ON) throw e;
+    memory.setDefinitions({ text: '', holders: [] });
+    return readInPieces(walker, source, chunks, memory);
+  }
+  for (const nodes of parts) walker.walkBlocks(nodes);
+  memory.endRun();
+}
+
+const RUNS_ON = new Error('a piece runs on into the appended definitions');
+
+/**
  * Reads a Markdown source. With `memory` (an editor's), the source is parsed piece by piece
  * (markdownChunks.ts) and pieces unchanged since the last reading are not parsed again; the
  * reading is the same either way.
@@ -237,13 +295,8 @@ export function readMarkdown(source: string, memory?: MarkdownMemory): DocumentR
   const walker = new MarkdownWalker(source);
   try {
     const chunks = memory ? markdownChunks(source) : null;
-    if (memory && chunks) {
-      const parse = (text: string) => (parser.parse(text) as Root).children;
-      for (const c of chunks) walker.walkBlocks(shiftNodes(memory.nodes(source.slice(c.start, c.end), parse), c.start, c.line - 1));
-      memory.endRun();
-    } else {
-      walker.walkBlocks((parser.parse(source) as Root).children);
-    }
+    if (memory && chunks) readInPieces(walker, source, chunks, memory);
+    else walker.walkBlocks((parser.parse(source) as Root).children);
     return walker.assemble();
   } catch (e) {
     return unreadDocument('markdown', `internal reader error: ${(e as Error).message}`);
