@@ -70,27 +70,11 @@ export function patchLatexReading(oldSource: string, old: LatexReading, source: 
     ok = false;
     return x;
   };
-  const blocks: Block[] = [];
-  // What ends before the edit is kept as it is; what follows is moved.
-  for (const b of old.blocks) {
-    if (b.end < at) {
-      blocks.push(b);
-      continue;
-    }
-    const start = b.start >= at ? move(b.start) : b.start;
-    const end = b.end === at ? b.end + delta : move(b.end);
-    blocks.push(b.cell ? { kind: b.kind, start, end, cell: b.cell } : { kind: b.kind, start, end });
-  }
-  const math: MathSpan[] = [];
-  for (const m of old.math) {
-    if (m.end < at) {
-      math.push(m);
-      continue;
-    }
-    const start = m.start >= at ? move(m.start) : m.start;
-    const end = m.end === at ? m.end + delta : move(m.end);
-    math.push({ start, end, display: m.display });
-  }
+  /** A span after the edit, moved (by `make`, in the span's own shape); one that ends before it is kept as it is. */
+  const moveSpan = <T extends { start: number; end: number }>(x: T, make: (start: number, end: number) => T): T =>
+    x.end < at ? x : make(x.start >= at ? move(x.start) : x.start, x.end === at ? x.end + delta : move(x.end));
+  const blocks: Block[] = old.blocks.map((b) => moveSpan(b, (start, end) => (b.cell ? { kind: b.kind, start, end, cell: b.cell } : { kind: b.kind, start, end })));
+  const math: MathSpan[] = old.math.map((m) => moveSpan(m, (start, end) => ({ start, end, display: m.display })));
   const srcMove = (x: number) => (x >= p + removed ? x + delta : x);
   const directives = old.directives.map((d) => ({ ...d, sourceStart: srcMove(d.sourceStart), sourceEnd: srcMove(d.sourceEnd), readingOffset: d.readingOffset >= at ? move(d.readingOffset) : d.readingOffset }));
   const includes = old.includes.map((i) => ({ ...i, sourceStart: srcMove(i.sourceStart), sourceEnd: srcMove(i.sourceEnd), readingOffset: i.readingOffset >= at ? move(i.readingOffset) : i.readingOffset }));
