@@ -235,7 +235,8 @@ export function extractClaims(doc: DocumentReading, cache?: SentenceCache): Clai
     }
   }
 
-  claims.push(...tableClaims(doc, inSkip, units, numbersIn, cache));
+  // Pushed one by one: a spread of a very long list overflows the stack.
+  for (const c of tableClaims(doc, inSkip, units, numbersIn, cache)) claims.push(c);
   claims.sort((a, b) => a.start - b.start);
   cache?.endRun();
   return { claims, declarations };
@@ -244,7 +245,7 @@ export function extractClaims(doc: DocumentReading, cache?: SentenceCache): Clai
 /** A claim found in a sentence before it is bound to a redshift. */
 type FoundClaim = Omit<Claim, 'z' | 'zRange' | 'zSource' | 'unchecked' | 'confidence' | 'sentenceRedshifts'> & { cueDistance: number };
 
-/** What a sentence says, from its text alone: its numbers, redshift mentions and typed (unbound) claims. */
+/** What a sentence says, from its text alone: its typed (unbound) claims and the redshift facts that binding needs. */
 export interface SentenceReading {
   /** The redshift mentions, when the sentence has claims to bind (else empty). */
   readonly mentions: readonly RedshiftMention[];
