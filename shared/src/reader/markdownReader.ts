@@ -49,6 +49,16 @@ class MarkdownWalker {
     return b;
   }
 
+  /** Where the nodes being walked start in the source (a piece parsed on its own has positions relative to itself). */
+  private base = 0;
+
+  /** Walks the nodes of a piece whose positions count from `base`. */
+  walkPiece(nodes: readonly RootContent[], base: number): void {
+    this.base = base;
+    this.walkBlocks(nodes);
+    this.base = 0;
+  }
+
   walkBlocks(nodes: readonly RootContent[]): void {
     for (const node of nodes) this.walkBlock(node);
   }
@@ -56,7 +66,7 @@ class MarkdownWalker {
   private walkBlock(node: RootContent): void {
     switch (node.type) {
       case 'yaml':
-        this.readFrontMatter(node.value, node.position?.start.offset ?? 0, node.position?.end.offset ?? 0);
+        this.readFrontMatter(node.value, this.base + (node.position?.start.offset ?? 0), this.base + (node.position?.end.offset ?? 0));
         return;
       case 'heading':
         this.inline(this.block('heading'), node.children);
@@ -68,7 +78,7 @@ class MarkdownWalker {
         this.math(this.block('paragraph'), node, true);
         return;
       case 'html':
-        this.html(node.value, node.position?.start.offset ?? 0, node.position?.end.offset ?? 0);
+        this.html(node.value, this.base + (node.position?.start.offset ?? 0), this.base + (node.position?.end.offset ?? 0));
         return;
       case 'table':
         this.table(node);
@@ -90,8 +100,8 @@ class MarkdownWalker {
 
   private inline(b: BlockDraft, nodes: readonly Nodes[]): void {
     for (const node of nodes) {
-      const start = node.position?.start.offset ?? 0;
-      const end = node.position?.end.offset ?? start;
+      const start = this.base + (node.position?.start.offset ?? 0);
+      const end = this.base + (node.position?.end.offset ?? start - this.base);
       switch (node.type) {
         case 'text':
           if (this.source.slice(start, end) === node.value) this.store.copy(b.out, start, end);
@@ -121,8 +131,8 @@ class MarkdownWalker {
 
   /** Math content is read by the LaTeX reader and its pieces mapped into the Markdown source. */
   private math(b: BlockDraft, node: { value: string; position?: { start: { offset?: number }; end: { offset?: number } } }, display: boolean): void {
-    const start = node.position?.start.offset ?? 0;
-    const end = node.position?.end.offset ?? start;
+    const start = this.base + (node.position?.start.offset ?? 0);
+    const end = this.base + (node.position?.end.offset ?? start - this.base);
     const raw = this.source.slice(start, end);
     const at = raw.indexOf(node.value);
     const verbatim = node.value.length > 0 && at >= 0;
@@ -272,15 +282,15 @@ function readInPieces(walker: MarkdownWalker, source: string, chunks: readonly C
     if (own.some((n) => (n.position?.end.offset ?? 0) > text.length)) throw RUNS_ON;
     return own;
   };
-  const parts: RootContent[][] = [];
+  const parts: Array<readonly RootContent[]> = [];
   try {
-    chunks.forEach((c, i) => parts.push(shiftNodes(memory.nodes(texts[i], parse), c.start, c.line - 1)));
+    chunks.forEach((_, i) => parts.push(memory.nodes(texts[i], parse)));
   } catch (e) {
     if (e !== RUNS_ON) throw e;
     memory.setDefinitions({ text: '', holders: [] });
     return readInPieces(walker, source, chunks, memory);
   }
-  for (const nodes of parts) walker.walkBlocks(nodes);
+  parts.forEach((nodes, i) => walker.walkPiece(nodes, chunks[i].start));
   memory.endRun();
 }
 
