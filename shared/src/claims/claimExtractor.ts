@@ -145,7 +145,6 @@ export function extractClaims(doc: DocumentReading, cache?: SentenceCache): Clai
   /** Binds the claims a sentence reading found to their redshifts. */
   function bindClaims(read: SentenceReading, sentence: Sentence): void {
     const mentions = read.mentions;
-    const sentenceText = text.slice(sentence.start, sentence.end);
     const found = read.found.filter((f) => !inSkip(f.start) && !inDeclaration(f.start));
     // Bind the redshift-dependent claims.
     const needing = found.filter((f) => NEEDS_REDSHIFT.has(f.kind) && f.sinceEpoch === null);
