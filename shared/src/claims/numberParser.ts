@@ -264,7 +264,7 @@ export function findNumbers(text: string, from = 0, to = text.length, unitCache?
       p = skipWord(text, p);
       continue;
     }
-    const parsed = parseNumberAt(text, p, to, unitCache);
+    const parsed = parseNumberAt(text, p, unitCache);
     if (!parsed) {
       p = skipWord(text, p);
       continue;
@@ -281,7 +281,7 @@ function skipWord(text: string, p: number): number {
 }
 
 /** Parses a number expression starting at p (a digit or '.'); null when it is part of an identifier. */
-function parseNumberAt(text: string, p: number, to: number, unitCache?: Map<string, Unit | null>): StatedNumber | null {
+function parseNumberAt(text: string, p: number, unitCache?: Map<string, Unit | null>): StatedNumber | null {
   // A sign right before the number (not a range dash after a digit).
   let start = p;
   let sign = 1;
