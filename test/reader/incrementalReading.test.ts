@@ -68,6 +68,13 @@ describe('incremental LaTeX reading', () => {
       expect(patchLatexReading(source, r, next)).toBeNull();
     }
     expect(patchLatexReading(source, r, source.replace('find', 'found'))).not.toBeNull();
+    // Plain edits that join or split what the reader reads as one token: a dash, $$, a control word.
+    const joins = 'The mat-ter-xx era, $a$x$b$ and \\a1b here.';
+    const j = readLatex(joins);
+    for (const next of [joins.replace('-ter-', '--'), joins.replace('$x$', '$$'), joins.replace('\\a1b', '\\ab')]) {
+      expect(patchLatexReading(joins, j, next)).toBeNull();
+    }
+    expect(patchLatexReading(joins, j, joins.replace('era', 'ear'))).not.toBeNull();
     // Plain text right after a macro that is not a word (\,) is still plain text.
     expect(patchLatexReading(source, r, source.replace('\\,Gpc', '\\,Gp'))).not.toBeNull();
   });

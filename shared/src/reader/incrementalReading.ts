@@ -20,6 +20,26 @@ const MAX_EDIT = 64;
 
 type LatexReading = DocumentReading & { macros: readonly MacroDefinition[] };
 
+const isLetter = (c: string | undefined) => c !== undefined && ((c >= 'A' && c <= 'Z') || (c >= 'a' && c <= 'z'));
+
+/**
+ * Whether the characters on either side of offset q of a LaTeX source belong to one token the
+ * reader reads as a whole: a dash (-- or ---), $$, or a control sequence (a backslash takes the
+ * next character, and every letter after it when that is a letter).
+ */
+function joinsAt(src: string, q: number): boolean {
+  const x = src[q - 1];
+  const y = src[q];
+  if (x === undefined || y === undefined) return false;
+  if ((x === '-' && y === '-') || (x === '$' && y === '$')) return true;
+  let i = q - 1;
+  if (isLetter(y)) while (i >= 0 && isLetter(src[i])) i--;
+  // An odd run of backslashes ending at i starts a control sequence that reaches q.
+  let slashes = 0;
+  while (i - slashes >= 0 && src[i - slashes] === '\\') slashes++;
+  return slashes % 2 === 1;
+}
+
 export function patchLatexReading(oldSource: string, old: LatexReading, source: string): LatexReading | null {
   if (old.unread) return null;
   // The edit: the common prefix and suffix of the two sources.
@@ -30,6 +50,9 @@ export function patchLatexReading(oldSource: string, old: LatexReading, source: 
   if (removed + inserted.length > MAX_EDIT) return null;
   const removedText = oldSource.slice(p, p + removed);
   if (!PLAIN.test(inserted) || !PLAIN.test(removedText)) return null;
+  // Plain characters can still join their neighbours into one token ("mat-ter-x" less "ter" is an
+  // en dash), or split one, at either edge of the edit, before or after it.
+  if (joinsAt(oldSource, p) || joinsAt(oldSource, p + removed) || joinsAt(source, p) || joinsAt(source, p + inserted.length)) return null;
   const edit = old.reading.verbatimEditAt(p, p + removed);
   if (edit === null) return null;
   const at = edit.at;
